@@ -1,0 +1,8 @@
+import type { Role } from '../../common/roles.js';
+
+export interface ClubDto {
+  id: string; name: string; timeZone: string; latitude: number; longitude: number;
+  pressureUnit: string; windUnit: string;
+}
+
+export interface MemberDto { userId: string; displayName: string; email: string; role: Role }

@@ -1,0 +1,23 @@
+import { HttpException } from '@nestjs/common';
+
+/** Codes the client can switch on; every error body carries one. */
+export type ErrorCode =
+  | 'validation_failed' | 'invalid_credentials' | 'too_many_attempts' | 'token_expired'
+  | 'unauthorized' | 'forbidden' | 'not_found' | 'conflict' | 'protocol_outdated'
+  | 'payload_too_large' | 'unsupported_media_type' | 'clock_ahead' | 'internal_error';
+
+export interface FieldProblem { field: string; message: string }
+
+export interface ErrorBody {
+  statusCode: number;
+  code: ErrorCode;
+  message: string;
+  details?: FieldProblem[];
+}
+
+/** An error with a status, a code and a sentence a person can act on. */
+export class AppError extends HttpException {
+  constructor(status: number, readonly code: ErrorCode, message: string, readonly details?: FieldProblem[]) {
+    super({ statusCode: status, code, message, ...(details ? { details } : {}) } satisfies ErrorBody, status);
+  }
+}

@@ -1,0 +1,42 @@
+import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
+import type { Response } from 'express';
+import { AppError, type ErrorBody, type ErrorCode } from './app-error.js';
+
+const CODE_BY_STATUS: Record<number, ErrorCode> = {
+  400: 'validation_failed', 401: 'unauthorized', 403: 'forbidden', 404: 'not_found',
+  409: 'conflict', 413: 'payload_too_large', 415: 'unsupported_media_type', 426: 'protocol_outdated',
+  429: 'too_many_attempts',
+};
+
+const PLAIN: Record<number, string> = {
+  401: 'Sign in to continue.', 403: 'Your role in this club does not allow this.',
+  404: 'Nothing was found at this address.', 413: 'The request is too large.',
+};
+
+/** Turns every error into the one body shape `{ statusCode, code, message, details? }`. */
+@Catch()
+export class ErrorFilter implements ExceptionFilter {
+  private readonly log = new Logger('Error');
+
+  catch(err: unknown, host: ArgumentsHost) {
+    const res = host.switchToHttp().getResponse<Response>();
+    const body = this.body(err);
+    res.status(body.statusCode).json(body);
+  }
+
+  body(err: unknown): ErrorBody {
+    if (err instanceof AppError) return err.getResponse() as ErrorBody;
+    if (err instanceof HttpException) {
+      const status = err.getStatus();
+      const raw = err.getResponse();
+      const msg = typeof raw === 'string' ? raw : (raw as { message?: unknown }).message;
+      const message = PLAIN[status] ?? (typeof msg === 'string' ? msg : err.message);
+      return { statusCode: status, code: CODE_BY_STATUS[status] ?? 'internal_error', message };
+    }
+    const status = (err as { status?: number; type?: string }).status;
+    if (status === 413) return { statusCode: 413, code: 'payload_too_large', message: 'The request is too large.' };
+    if (status === 400) return { statusCode: 400, code: 'validation_failed', message: 'The request body is not valid JSON.' };
+    this.log.error(err instanceof Error ? err.stack : String(err));
+    return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, code: 'internal_error', message: 'Something went wrong on the server. Try again; if it keeps happening, tell your club admin.' };
+  }
+}

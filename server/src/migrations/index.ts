@@ -1,0 +1,4 @@
+// Migrations are listed explicitly, oldest first (a glob can silently find none).
+import { Foundation1796157054596 } from './1796157054596-Foundation.js';
+
+export const MIGRATIONS = [Foundation1796157054596];

@@ -1,0 +1,31 @@
+// The demo scenario: an invented club and people, so a new install has something to show.
+import type { Role } from '../common/roles.js';
+
+export const DEMO_PASSWORD = 'surf-demo-2026';
+
+export interface DemoClub {
+  slug: string; name: string; timeZone: string; latitude: number; longitude: number;
+  pressureUnit: 'kPa' | 'psi' | 'bar' | 'mbar'; windUnit: 'kn' | 'km/h' | 'm/s';
+  members: { email: string; displayName: string; role: Role }[];
+}
+
+export const DEMO_CLUBS: DemoClub[] = [
+  {
+    slug: 'gannet-bay', name: 'Gannet Bay Surf Life Saving Club', timeZone: 'Australia/Sydney',
+    latitude: -33.2871, longitude: 151.5692, pressureUnit: 'kPa', windUnit: 'kn',
+    members: [
+      { email: 'admin@gannetbay.example', displayName: 'Mara Okonkwo-Hale', role: 'admin' },
+      { email: 'captain@gannetbay.example', displayName: 'Tomas Varga', role: 'supervisor' },
+      { email: 'driver@gannetbay.example', displayName: 'Priya Lindholm', role: 'driver' },
+      { email: 'crew@gannetbay.example', displayName: 'Sam Whitcombe', role: 'crew' },
+    ],
+  },
+  {
+    slug: 'kelp-reef', name: 'Kelp Reef Surf Lifesaving Club', timeZone: 'Pacific/Auckland',
+    latitude: -36.9021, longitude: 174.4263, pressureUnit: 'psi', windUnit: 'km/h',
+    members: [
+      { email: 'admin@kelpreef.example', displayName: 'Aroha Pennington', role: 'admin' },
+      { email: 'crew@kelpreef.example', displayName: 'Declan Moss', role: 'crew' },
+    ],
+  },
+];
