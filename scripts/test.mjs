@@ -1,0 +1,51 @@
+// npm test: every suite of every workspace against a throwaway PostgreSQL, then browser tests
+// against the built app served by the real server. Exits non-zero on any failure.
+import { mkdtempSync, rmSync, mkdirSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { ensureDependencies } from './lib/deps.mjs';
+import { ensureChromium } from './lib/chromium.mjs';
+import { buildAll } from './lib/build.mjs';
+import { startPostgres } from './lib/postgres.mjs';
+import { freePort } from './lib/ports.mjs';
+import { runSuite } from './lib/suites.mjs';
+
+const repo = fileURLToPath(new URL('..', import.meta.url));
+const reports = join(repo, '.tmp', 'reports');
+mkdirSync(reports, { recursive: true });
+
+ensureDependencies(repo);
+const chromium = ensureChromium();
+buildAll(repo);
+
+const pgRoot = mkdtempSync(join(tmpdir(), 'breakline-test-pg-'));
+const pg = await startPostgres({ root: pgRoot, port: await freePort(), database: 'breakline_test', password: 'breakline-test', fast: true });
+const cleanup = () => { pg.stop(); rmSync(pgRoot, { recursive: true, force: true }); };
+process.on('SIGINT', () => { cleanup(); process.exit(130); });
+
+const base = { ...process.env, CHROMIUM_PATH: chromium, FORCE_COLOR: process.env.CI ? '0' : process.env.FORCE_COLOR };
+const vitest = (dir, config, report) => ['node_modules/vitest/vitest.mjs', 'run', '--root', dir, ...(config ? ['--config', config] : []),
+  '--reporter=default', '--reporter=json', `--outputFile.json=${report}`];
+const results = [];
+try {
+  let r = join(reports, 'sync-protocol.json');
+  results.push(runSuite('sync-protocol (vitest)', 'node', vitest('sync-protocol', null, r), { cwd: repo, env: base, report: r }));
+  r = join(reports, 'client.json');
+  results.push(runSuite('client (vitest)', 'node', vitest('.', 'vite.config.ts', r), { cwd: repo, env: base, report: r }));
+  r = join(reports, 'server.json');
+  results.push(runSuite('server (jest, PostgreSQL)', 'node',
+    ['--experimental-vm-modules', '../node_modules/jest/bin/jest.js', '--runInBand', '--json', `--outputFile=${r}`],
+    { cwd: join(repo, 'server'), env: { ...base, DATABASE_URL: pg.url }, report: r }));
+  r = join(reports, 'browser.json');
+  results.push(runSuite('browser (Chromium, built app, real server)', 'node', vitest('.', 'client/e2e/vitest.e2e.config.ts', r),
+    { cwd: repo, env: { ...base, E2E_DATABASE_URL: pg.addDatabase('breakline_e2e') }, report: r }));
+} finally {
+  cleanup();
+}
+
+const passed = results.reduce((n, s) => n + s.passed, 0);
+const failed = results.reduce((n, s) => n + s.failed, 0);
+console.log('\n' + results.map((s) => `${s.ok ? '✔' : '✖'} ${s.name}: ${s.passed} passed, ${s.failed} failed`).join('\n'));
+console.log(`${passed} passed, ${failed} failed`);
+process.exit(results.every((s) => s.ok) ? 0 : 1);
