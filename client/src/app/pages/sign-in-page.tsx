@@ -1,0 +1,41 @@
+import Alert from '@mui/material/Alert';
+import Box from '@mui/material/Box';
+import Paper from '@mui/material/Paper';
+import Typography from '@mui/material/Typography';
+import { Navigate, useNavigate, useSearchParams } from 'react-router-dom';
+import { SignInForm } from '@/features/auth/components/sign-in-form';
+import { useAuthState } from '@/features/auth/use-auth';
+import { safeNextPath } from '../paths';
+
+export function SignInPage() {
+  const { session, notice } = useAuthState();
+  const navigate = useNavigate();
+  const [params] = useSearchParams();
+  const next = safeNextPath(params.get('next'));
+  // Navigation after a successful sign-in is done by the form's callback; this covers a visit while signed in.
+  if (session) return <Navigate to={next} replace />;
+  return (
+    <Box sx={{ minHeight: '100dvh', display: 'grid', placeItems: 'center', p: 2 }}>
+      <Paper component="main" sx={{ p: { xs: 3, sm: 4 }, width: '100%', maxWidth: 420 }}>
+        <Box sx={{ display: 'flex', alignItems: 'center', gap: 1.5, mb: 1 }}>
+          <Box component="img" src="/icon.svg" alt="" sx={{ width: 44, height: 44, borderRadius: 1.5 }} />
+          <Typography variant="h4" component="h1" sx={{ fontWeight: 700 }}>
+            Breakline
+          </Typography>
+        </Box>
+        <Typography color="text.secondary" sx={{ mb: 3 }}>
+          Sign in with the e-mail address your club has for you.
+        </Typography>
+        {notice && (
+          <Alert severity="info" sx={{ mb: 2 }}>
+            {notice}
+          </Alert>
+        )}
+        <SignInForm onSignedIn={() => navigate(next, { replace: true })} />
+        <Typography variant="body2" color="text.secondary" sx={{ mt: 3 }}>
+          Forgotten your password? Ask your club admin to send you a new invitation.
+        </Typography>
+      </Paper>
+    </Box>
+  );
+}

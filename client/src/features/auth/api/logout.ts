@@ -1,0 +1,28 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '@/lib/api-client';
+import { tokenStore } from '../token-store';
+
+export async function logout(refreshToken: string): Promise<void> {
+  await apiRequest<void>('/api/auth/logout', { method: 'POST', body: { refreshToken }, auth: false });
+}
+
+/**
+ * Signs out on this device at once, then tells the server to revoke the refresh token.
+ * With no signal the server is not told; the token then lapses at its own expiry.
+ */
+export function useSignOut() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: async () => {
+      const refreshToken = tokenStore.getState().session?.refreshToken;
+      tokenStore.clear();
+      queryClient.clear();
+      if (!refreshToken) return;
+      try {
+        await logout(refreshToken);
+      } catch {
+        // Already signed out here; a failed revoke must not keep the person signed in.
+      }
+    },
+  });
+}

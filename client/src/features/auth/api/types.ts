@@ -1,0 +1,36 @@
+// Wire shapes of /api/auth/*. They belong in the shared protocol package once it has them.
+export type Role = 'crew' | 'driver' | 'supervisor' | 'admin';
+
+export interface AuthUser {
+  id: string;
+  email: string;
+  displayName: string;
+}
+
+export interface ActiveClub {
+  id: string;
+  name: string;
+  timeZone: string;
+  pressureUnit: string;
+  role: Role;
+}
+
+export interface Membership {
+  clubId: string;
+  clubName: string;
+  role: Role;
+}
+
+export interface Me {
+  user: AuthUser;
+  activeClub: ActiveClub;
+  memberships: Membership[];
+}
+
+/** What login, refresh and switch-club answer. */
+export interface SessionAnswer extends Me {
+  accessToken: string;
+  refreshToken: string;
+  /** ISO 8601 instant. */
+  accessExpiresAt: string;
+}

@@ -1,0 +1,67 @@
+import { fileURLToPath } from 'node:url';
+import react from '@vitejs/plugin-react';
+import { VitePWA } from 'vite-plugin-pwa';
+import { defineConfig } from 'vitest/config';
+
+// Paths are absolute because the client scripts run Vite from client/ with
+// --config ../vite.config.ts, and a relative `root` would resolve against the cwd.
+const clientDir = fileURLToPath(new URL('./client', import.meta.url));
+const srcDir = fileURLToPath(new URL('./client/src', import.meta.url));
+const apiProxy = { '/api': { target: 'http://127.0.0.1:3000', changeOrigin: false } };
+
+// Our palette (client/src/app/palette.ts holds the same values for the UI).
+const navy = '#0E2A47';
+const sand = '#F4EBDD';
+
+const pwa = VitePWA({
+  registerType: 'prompt',
+  injectRegister: false, // registered by client/src/app/pwa.ts with workbox-window
+  // The glob below already precaches public/ (icons included); listing them again would duplicate entries.
+  includeManifestIcons: false,
+  manifest: {
+    id: '/',
+    name: 'Breakline',
+    short_name: 'Breakline',
+    description: 'Checks, trips and defects for inflatable rescue boats, on the beach and offline.',
+    lang: 'en',
+    start_url: '/',
+    scope: '/',
+    display: 'standalone',
+    theme_color: navy,
+    background_color: sand,
+    icons: [
+      { src: '/icons/icon-192.png', sizes: '192x192', type: 'image/png', purpose: 'any' },
+      { src: '/icons/icon-512.png', sizes: '512x512', type: 'image/png', purpose: 'any' },
+      { src: '/icons/icon-maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
+    ],
+  },
+  workbox: {
+    // The plugin adds the web manifest itself. Fonts as woff2 only: every browser with service
+    // workers reads it, and the .woff copies would double the font bytes on a phone.
+    globPatterns: ['**/*.{js,css,html,svg,png,woff2}'],
+    navigateFallback: 'index.html',
+    // The API must always reach the server (or fail plainly), never get the app shell back.
+    navigateFallbackDenylist: [/^\/api\//],
+    cleanupOutdatedCaches: true,
+  },
+});
+
+export default defineConfig(({ mode }) => ({
+  root: clientDir,
+  resolve: { alias: { '@': srcDir } },
+  plugins: mode === 'test' ? [react()] : [react(), pwa],
+  build: {
+    outDir: fileURLToPath(new URL('./client/dist', import.meta.url)),
+    emptyOutDir: true,
+  },
+  server: { proxy: apiProxy },
+  preview: { proxy: apiProxy },
+  test: {
+    environment: 'jsdom',
+    // Relative to `root` (client/), so this is client/src/**.
+    include: ['src/**/*.test.{ts,tsx}'],
+    setupFiles: [fileURLToPath(new URL('./client/src/test/setup.ts', import.meta.url))],
+    unstubGlobals: true,
+    restoreMocks: true,
+  },
+}));
