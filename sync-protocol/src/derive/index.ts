@@ -1,0 +1,11 @@
+export * from './pressure.js';
+export * from './beaufort.js';
+export * from './sea-state.js';
+export * from './sun.js';
+export * from './time.js';
+export * from './fuel.js';
+export * from './service.js';
+export * from './readiness.js';
+export * from './awards.js';
+export * from './season.js';
+export { addMonthsClamped, addDays, daysBetween } from './calendar.js';
