@@ -25,20 +25,20 @@ const cleanup = () => { pg.stop(); rmSync(pgRoot, { recursive: true, force: true
 process.on('SIGINT', () => { cleanup(); process.exit(130); });
 
 const base = { ...process.env, CHROMIUM_PATH: chromium, FORCE_COLOR: process.env.CI ? '0' : process.env.FORCE_COLOR };
-const vitest = (dir, config, report) => ['node_modules/vitest/vitest.mjs', 'run', '--root', dir, ...(config ? ['--config', config] : []),
+const vitest = (dir, config, report) => ['node_modules/vitest/vitest.mjs', 'run', ...(dir ? ['--root', dir] : []), ...(config ? ['--config', config] : []),
   '--reporter=default', '--reporter=json', `--outputFile.json=${report}`];
 const results = [];
 try {
   let r = join(reports, 'sync-protocol.json');
   results.push(runSuite('sync-protocol (vitest)', 'node', vitest('sync-protocol', null, r), { cwd: repo, env: base, report: r }));
   r = join(reports, 'client.json');
-  results.push(runSuite('client (vitest)', 'node', vitest('.', 'vite.config.ts', r), { cwd: repo, env: base, report: r }));
+  results.push(runSuite('client (vitest)', 'node', vitest(null, 'vite.config.ts', r), { cwd: repo, env: base, report: r }));
   r = join(reports, 'server.json');
   results.push(runSuite('server (jest, PostgreSQL)', 'node',
     ['--experimental-vm-modules', '../node_modules/jest/bin/jest.js', '--runInBand', '--json', `--outputFile=${r}`],
     { cwd: join(repo, 'server'), env: { ...base, DATABASE_URL: pg.url }, report: r }));
   r = join(reports, 'browser.json');
-  results.push(runSuite('browser (Chromium, built app, real server)', 'node', vitest('.', 'client/e2e/vitest.e2e.config.ts', r),
+  results.push(runSuite('browser (Chromium, built app, real server)', 'node', vitest(null, 'client/e2e/vitest.e2e.config.ts', r),
     { cwd: repo, env: { ...base, E2E_DATABASE_URL: pg.addDatabase('breakline_e2e') }, report: r }));
 } finally {
   cleanup();
