@@ -1,0 +1,96 @@
+import { decodeHlc, maxEncodedHlc } from '../hlc.js';
+import { assertNotAhead, type HybridClock } from '../hybrid-clock.js';
+import { ClockDriftError } from '../hlc-errors.js';
+import { validatePatch, validateRecord, describeErrors } from '../validate.js';
+import { checkCreate, checkDelete, checkUpdate } from '../permissions.js';
+import { mergeMutation } from '../merge.js';
+import type { Actor } from '../merge-types.js';
+import type { Mutation, MutationError, MutationResult } from '../wire.js';
+import { deepEqual } from '../deep-equal.js';
+import type { AuthContext, ClubState, StoredRecord } from './club-state.js';
+import { recordConflicts } from './conflicts.js';
+
+export interface ApplyContext {
+  club: ClubState;
+  auth: AuthContext;
+  deviceId: string;
+  pt: number;
+  clock: HybridClock;
+  newId: () => string;
+}
+
+const rejected = (m: Mutation, error: MutationError): MutationResult => ({ mutationId: m.mutationId, status: 'rejected', error });
+
+/** Check, merge and write one mutation, as the real server does inside the batch transaction. */
+export function applyMutation(ctx: ApplyContext, m: Mutation): MutationResult {
+  const { club, auth, pt } = ctx;
+  try {
+    assertNotAhead(decodeHlc(m.hlc), pt);
+  } catch (e) {
+    if (e instanceof ClockDriftError) return rejected(m, { code: 'clock-drift', message: e.message });
+    throw e;
+  }
+  const valid = validatePatch(m.kind, m.patch);
+  if (!valid.ok) return rejected(m, { code: 'invalid', message: describeErrors(valid.errors), fields: valid.errors });
+  const stored: StoredRecord | undefined = club.records[m.recordId];
+  const actor: Actor = { deviceId: ctx.deviceId, userId: auth.userId, role: auth.role };
+
+  if (!stored) {
+    if (m.baseVersion !== 0 || m.deleted) {
+      return rejected(m, { code: 'not-found', message: 'This record is not on the server, so the change could not be saved.' });
+    }
+    const full = validateRecord(m.kind, m.patch);
+    if (!full.ok) return rejected(m, { code: 'invalid', message: describeErrors(full.errors), fields: full.errors });
+  } else if (stored.kind !== m.kind) {
+    return rejected(m, { code: 'invalid', message: `This record is ${stored.kind}, not ${m.kind}.` });
+  }
+  const decision = !stored
+    ? checkCreate(m.kind, auth.role, m.patch, auth.userId)
+    : m.deleted
+      ? checkDelete(m.kind, auth.role, stored.fields, auth.userId)
+      : checkUpdate(m.kind, auth.role, m.patch, stored.fields, auth.userId);
+  if (!decision.ok) return rejected(m, { code: 'forbidden', message: decision.reason });
+
+  const merge = mergeMutation({
+    kind: m.kind,
+    current: stored ? stored.fields : null,
+    currentDeleted: stored?.deleted,
+    currentHlc: stored?.hlc ?? null,
+    currentActor: stored?.lastActor ?? null,
+    currentFieldStamps: stored?.fieldStamps,
+    mutation: { base: m.base, patch: m.patch, hlc: m.hlc, deleted: m.deleted, actor },
+    baseIsCurrent: stored !== undefined && stored.version === m.baseVersion,
+  });
+  const fields = { ...(stored?.fields ?? {}), ...merge.apply };
+  const changed = !stored || merge.deleted !== stored.deleted || !deepEqual(fields, stored.fields);
+  if (changed && !merge.deleted) {
+    const full = validateRecord(m.kind, fields);
+    if (!full.ok) return rejected(m, { code: 'invalid', message: `After merging with newer changes: ${describeErrors(full.errors)}`, fields: full.errors });
+  }
+  ctx.clock.receive(decodeHlc(m.hlc), pt);
+  let record = stored;
+  if (changed) {
+    club.changeSeq += 1;
+    const stamps = { ...(stored?.fieldStamps ?? {}) };
+    for (const f of Object.keys(merge.apply)) stamps[f] = { actor, hlc: m.hlc };
+    if (!stored || merge.deleted !== stored.deleted) stamps.deleted = { actor, hlc: m.hlc };
+    record = {
+      id: m.recordId,
+      kind: m.kind,
+      clubId: auth.clubId,
+      version: (stored?.version ?? 0) + 1,
+      hlc: stored ? maxEncodedHlc(stored.hlc, m.hlc) : m.hlc,
+      updatedAt: new Date(pt).toISOString(),
+      deleted: merge.deleted,
+      fields,
+      changeSeq: club.changeSeq,
+      lastActor: actor,
+      fieldStamps: stamps,
+    };
+    club.records[m.recordId] = record;
+  }
+  const conflictIds = recordConflicts(ctx, m, merge.conflicts);
+  const result: MutationResult = { mutationId: m.mutationId, status: merge.status, version: record!.version };
+  if (conflictIds.length > 0) Object.assign(result, { conflictId: conflictIds[0], conflictIds });
+  return result;
+}

@@ -1,0 +1,19 @@
+import { z } from 'zod';
+import { atLeastZero, label, recordId, utcTime } from './common.js';
+import { defineKind } from './spec.js';
+
+/** A service done on a motor; the motor's service due is worked out from these. */
+export const serviceRecordSpec = defineKind({
+  label: 'a service record',
+  schema: z.strictObject({
+    motorId: recordId(),
+    servicedAt: utcTime(),
+    engineHours: atLeastZero(),
+    work: label(4000),
+    /** Name of whoever did it; may be an outside mechanic, so not a member id. */
+    performedBy: label(120),
+  }),
+  immutable: ['motorId'],
+  access: { create: 'supervisor', update: 'supervisor', delete: 'admin' },
+});
+export type ServiceRecordFields = z.infer<typeof serviceRecordSpec.schema>;

@@ -1,0 +1,74 @@
+import { describe, expect, it } from 'vitest';
+import { RECORD_KINDS, fieldNames, validatePatch, validateRecord, mergeRuleOf, isImmutableField } from '../src/index.js';
+import { FIXTURES } from './support/fixtures.js';
+
+const errorsOf = (r: { ok: boolean; errors?: { field: string; message: string }[] }) => (r.ok ? [] : r.errors!);
+
+describe('record validation', () => {
+  it.each(RECORD_KINDS)('accepts a complete %s and every single-field patch of it', (kind) => {
+    const fields = FIXTURES[kind] as Record<string, unknown>;
+    expect(errorsOf(validateRecord(kind, fields))).toEqual([]);
+    expect(Object.keys(fields).sort()).toEqual(fieldNames(kind).sort());
+    for (const [k, v] of Object.entries(fields)) expect(validatePatch(kind, { [k]: v }).ok).toBe(true);
+  });
+
+  it.each(RECORD_KINDS)('refuses unknown fields and sync columns in a %s patch', (kind) => {
+    const r = validatePatch(kind, { clubId: 'x', colour: 'red' });
+    expect(errorsOf(r).map((e) => e.field).sort()).toEqual(['clubId', 'colour']);
+    expect(errorsOf(r)[0]!.message).toMatch(/has no field "(clubId|colour)"; remove it\./);
+  });
+
+  it('names the missing fields of a whole record', () => {
+    const { description: _d, ...rest } = FIXTURES.defect;
+    expect(errorsOf(validateRecord('defect', rest))).toEqual([{ field: 'description', message: 'Description is required.' }]);
+  });
+
+  it('explains wrong values in words a person can act on', () => {
+    const cases: [string, Record<string, unknown>, string, string][] = [
+      ['defect', { status: 'fixed' }, 'status', 'Status must be one of: open, assigned, repaired, verified, rejected.'],
+      ['defect', { reportedAt: '2026-12-05 21:30' }, 'reportedAt', 'Reported at must be a UTC date and time such as 2026-12-01T09:30:00Z.'],
+      ['defect', { photos: ['xyz'] }, 'photos.0', 'Photos #1 must be a photo reference (the SHA-256 of the photo, 64 lowercase hex characters).'],
+      ['defect', { boatId: 'boat-3' }, 'boatId', 'Boat must be a record id (a UUID).'],
+      ['defect', { description: '   ' }, 'description', 'Description must not be blank.'],
+      ['trip', { windSpeedKn: -3 }, 'windSpeedKn', 'Wind speed (knots) must be at least 0.'],
+      ['trip', { windDirectionDeg: 360 }, 'windDirectionDeg', 'Wind direction (degrees) must be less than 360.'],
+      ['trip', { purpose: 'joyride' }, 'purpose', 'Purpose must be one of: patrol, training, rescue, search, preventive-action, event-support, maintenance-run.'],
+      ['trip', { retrievedAt: 5 }, 'retrievedAt', 'Retrieved at must be a UTC date and time such as 2026-12-01T09:30:00Z.'],
+      ['incidentNote', { peopleHelped: 1.5 }, 'peopleHelped', 'People helped must be a whole number.'],
+      ['boat', { inService: 'yes' }, 'inService', 'In service must be yes or no (true or false).'],
+      ['boat', { airChambers: [{ id: 'p', name: 'port pontoon', valve: '', minKpa: 30, maxKpa: 20 }] }, 'airChambers.0.minKpa', 'Air chambers #1 minimum pressure (kPa) must not be above the maximum pressure.'],
+      ['signOn', { sessionDate: '2026-02-30' }, 'sessionDate', 'Session date must be a date such as 2026-12-01.'],
+      ['boat', { name: null }, 'name', 'Name must be filled in.'],
+    ];
+    for (const [kind, patch, field, message] of cases) {
+      expect(errorsOf(validatePatch(kind as 'trip', patch)), `${kind} ${field}`).toEqual([{ field, message }]);
+    }
+  });
+
+  it('applies the rules across fields of a whole record', () => {
+    const trip = { ...FIXTURES.trip, retrievedAt: '2026-12-05T21:00:00Z' };
+    expect(errorsOf(validateRecord('trip', trip))).toEqual([{ field: 'retrievedAt', message: 'Retrieval must not be before launch.' }]);
+    const motor = { ...FIXTURES.motor, premixRatio: null };
+    expect(errorsOf(validateRecord('motor', motor))[0]!.field).toBe('premixRatio');
+    const defect = { ...FIXTURES.defect, status: 'rejected', rejectedReason: ' ' };
+    expect(errorsOf(validateRecord('defect', defect))[0]!.field).toBe('rejectedReason');
+    const check = { ...FIXTURES.check, status: 'complete' };
+    expect(errorsOf(validateRecord('check', check))[0]!.field).toBe('completedAt');
+    const template = { ...FIXTURES.checkTemplate, sections: [{ ...FIXTURES.checkTemplate.sections[0]!, items: [{ id: 'n', label: 'Tubes', kind: 'count', critical: false }] }] };
+    expect(errorsOf(validateRecord('checkTemplate', template))[0]!.field).toBe('sections.0.items.0.required');
+  });
+
+  it('refuses things that are not records or kinds', () => {
+    expect(errorsOf(validatePatch('defect', [1]))[0]!.message).toBe('A change must be a group of fields.');
+    expect(errorsOf(validateRecord('canoe' as 'defect', {}))[0]!.message).toMatch(/Unknown record kind "canoe"/);
+  });
+
+  it('keeps merge rules and immutable fields as data', () => {
+    expect(mergeRuleOf('defect', 'notes')).toBe('union');
+    expect(mergeRuleOf('defect', 'status')).toBe('defect-status');
+    expect(mergeRuleOf('check', 'results')).toBe('check-results');
+    expect(mergeRuleOf('trip', 'purpose')).toBe('lww');
+    expect(isImmutableField('check', 'boatId')).toBe(true);
+    expect(isImmutableField('check', 'status')).toBe(false);
+  });
+});
