@@ -6,6 +6,7 @@ import { typeormOptions } from './database/typeorm-options.js';
 import { AuthModule } from './auth/auth.module.js';
 import { ClubsModule } from './clubs/clubs.module.js';
 import { UsersModule } from './users/users.module.js';
+import { SyncModule } from './sync/sync.module.js';
 import { HealthController } from './health/health.controller.js';
 
 @Module({
@@ -18,6 +19,7 @@ import { HealthController } from './health/health.controller.js';
     UsersModule,
     ClubsModule,
     AuthModule,
+    SyncModule,
   ],
   controllers: [HealthController],
 })

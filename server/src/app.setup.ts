@@ -23,9 +23,10 @@ export function configureApp(app: NestExpressApplication, env: Env) {
       },
     },
   }));
-  app.useBodyParser('json', { limit: '5mb' });
+  // Push bodies may arrive gzip-encoded; the limit applies to the inflated JSON.
+  app.useBodyParser('json', { limit: `${env.REQUEST_BODY_LIMIT_MB}mb`, inflate: true });
   app.setGlobalPrefix('api');
-  app.useGlobalFilters(new ErrorFilter());
+  app.useGlobalFilters(new ErrorFilter(env.REQUEST_BODY_LIMIT_MB));
   app.useGlobalPipes(appValidationPipe());
   const doc = new DocumentBuilder().setTitle('Breakline API').setVersion('1').addBearerAuth().build();
   SwaggerModule.setup('api/docs', app, () => SwaggerModule.createDocument(app, doc));

@@ -25,7 +25,9 @@ export * from './wire-schemas.js';
 export * from './merge-rules.js';
 export * from './merge.js';
 export * from './replica.js';
-export { SyncRequestError, counterIds, type AuthContext } from './apply/club-state.js';
+export * from './apply/club-state.js';
+export * from './apply/apply-mutation.js';
+export * from './apply/settle.js';
 export * from './testing/memory-server.js';
 // The record kinds are the contract for these names; derive/ declares the same values.
 export { TRIP_PURPOSES, type TripPurpose } from './kinds/trip.js';

@@ -10,13 +10,15 @@ const CODE_BY_STATUS: Record<number, ErrorCode> = {
 
 const PLAIN: Record<number, string> = {
   401: 'Sign in to continue.', 403: 'Your role in this club does not allow this.',
-  404: 'Nothing was found at this address.', 413: 'The request is too large.',
+  404: 'Nothing was found at this address.',
 };
 
 /** Turns every error into the one body shape `{ statusCode, code, message, details? }`. */
 @Catch()
 export class ErrorFilter implements ExceptionFilter {
   private readonly log = new Logger('Error');
+
+  constructor(private readonly bodyLimitMb?: number) {}
 
   catch(err: unknown, host: ArgumentsHost) {
     const res = host.switchToHttp().getResponse<Response>();
@@ -30,13 +32,23 @@ export class ErrorFilter implements ExceptionFilter {
       const status = err.getStatus();
       const raw = err.getResponse();
       const msg = typeof raw === 'string' ? raw : (raw as { message?: unknown }).message;
+      if (status === 413) return this.tooLarge();
+      // Express's JSON parser failure reaches here as a bare "Bad Request".
+      if (status === 400 && msg === 'Bad Request') return { statusCode: 400, code: 'validation_failed', message: 'The request body is not valid JSON.' };
       const message = PLAIN[status] ?? (typeof msg === 'string' ? msg : err.message);
       return { statusCode: status, code: CODE_BY_STATUS[status] ?? 'internal_error', message };
     }
-    const status = (err as { status?: number; type?: string }).status;
-    if (status === 413) return { statusCode: 413, code: 'payload_too_large', message: 'The request is too large.' };
+    const { status, limit } = err as { status?: number; limit?: number };
+    if (status === 413) return this.tooLarge(limit);
+    if (status === 415) return { statusCode: 415, code: 'unsupported_media_type', message: 'The request body is in an encoding the server does not accept; send JSON, plain or gzip.' };
     if (status === 400) return { statusCode: 400, code: 'validation_failed', message: 'The request body is not valid JSON.' };
     this.log.error(err instanceof Error ? err.stack : String(err));
     return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, code: 'internal_error', message: 'Something went wrong on the server. Try again; if it keeps happening, tell your club admin.' };
+  }
+
+  private tooLarge(limitBytes?: number): ErrorBody {
+    const mb = limitBytes ? Math.round(limitBytes / 1048576) : this.bodyLimitMb;
+    const limit = mb ? ` (${mb} MB)` : '';
+    return { statusCode: 413, code: 'payload_too_large', message: `The request is larger than the server accepts${limit}. Send fewer changes at a time.` };
   }
 }

@@ -29,6 +29,12 @@ export class Env {
   @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(1440)
   LOGIN_WINDOW_MINUTES = 15;
 
+  @IsOptional() @Type(() => Number) @IsInt() @Min(7) @Max(3650)
+  TOMBSTONE_RETENTION_DAYS = 180;
+
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(256)
+  REQUEST_BODY_LIMIT_MB = 16;
+
   @IsOptional() @IsString()
   CLIENT_DIST?: string;
 

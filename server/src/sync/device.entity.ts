@@ -1,0 +1,20 @@
+import { Column, Entity, PrimaryColumn } from 'typeorm';
+
+/** A phone or tablet's last accepted mutation seq, written in the same transaction as its changes. */
+@Entity('sync_devices')
+export class SyncDevice {
+  @PrimaryColumn({ name: 'club_id', type: 'uuid' })
+  clubId: string;
+
+  @PrimaryColumn({ name: 'device_id', type: 'text' })
+  deviceId: string;
+
+  @Column({ name: 'last_seq', type: 'int', default: 0 })
+  lastSeq: number;
+
+  @Column({ name: 'last_user_id', type: 'uuid', nullable: true })
+  lastUserId: string | null;
+
+  @Column({ name: 'last_push_at', type: 'timestamptz', nullable: true })
+  lastPushAt: Date | null;
+}

@@ -1,0 +1,107 @@
+import { Injectable } from '@nestjs/common';
+import { DataSource, type EntityManager } from 'typeorm';
+import {
+  applyMutation, cloneJson, deepEqual, HybridClock, PushRequestSchema,
+  type ClubState, type Mutation, type MutationResult, type PushResponse, type RecordKind, type StoredRecord,
+} from '@breakline/sync-protocol';
+import { AppError } from '../common/app-error.js';
+import type { Principal } from '../auth/principal.js';
+import { recordStore } from '../records/record-store.js';
+import { appendChanges, insertConflicts, type ChangeEntry } from './change-log.js';
+import { lockClub, lockDevice, saveClubSeq, saveDeviceSeq } from './club-lock.js';
+import { assertProtocol } from './sync-errors.js';
+
+const NOT_FOUND = 'This record is not on the server, so the change could not be saved.';
+
+/**
+ * Push: one transaction a batch. The club's records that the batch touches are loaded in one
+ * query a kind, every mutation is checked and merged by the same rules the phones' tests use
+ * (sync-protocol), and the results are written back in one statement a table.
+ */
+@Injectable()
+export class PushService {
+  private readonly clock = new HybridClock('server');
+
+  constructor(private readonly db: DataSource) {}
+
+  async push(p: Principal, body: unknown): Promise<PushResponse> {
+    assertProtocol(body);
+    const parsed = PushRequestSchema.safeParse(body);
+    if (!parsed.success) {
+      const details = parsed.error.issues.map((i) => ({ field: i.path.join('.') || 'body', message: i.message }));
+      throw new AppError(400, 'validation_failed', 'The push is not in the sync format.', details);
+    }
+    const { deviceId, mutations } = parsed.data as { deviceId: string; mutations: Mutation[] };
+    return this.db.transaction((em) => this.pushInTransaction(em, p, deviceId, mutations));
+  }
+
+  private async pushInTransaction(em: EntityManager, p: Principal, deviceId: string, mutations: Mutation[]): Promise<PushResponse> {
+    const locked = await lockClub(em, p.clubId);
+    const deviceSeq = await lockDevice(em, p.clubId, deviceId);
+    // Duplicates are loaded too, so their answer carries the record's current version.
+    const { records, foreign } = await this.loadTouched(em, p.clubId, mutations);
+    const club: ClubState = { records, changeSeq: locked.lastSeq, deviceSeq: { [deviceId]: deviceSeq }, conflicts: [], purgedThrough: locked.purgedThroughSeq };
+    const auth = { userId: p.userId, role: p.role, clubId: p.clubId };
+    const ctx = { club, auth, deviceId, pt: Date.now(), clock: this.clock, newId: () => crypto.randomUUID() };
+    const results: MutationResult[] = [];
+    const changes: ChangeEntry[] = [];
+    for (const m of mutations) {
+      if (m.seq <= (club.deviceSeq[deviceId] ?? 0)) {
+        const rec = club.records[m.recordId];
+        results.push({ mutationId: m.mutationId, status: 'duplicate', ...(rec ? { version: rec.version } : {}) });
+        continue;
+      }
+      club.deviceSeq[deviceId] = m.seq;
+      if (foreign.has(m.recordId)) {
+        results.push({ mutationId: m.mutationId, status: 'rejected', error: { code: 'not-found', message: NOT_FOUND } });
+        continue;
+      }
+      const before = club.records[m.recordId];
+      const prevFields = before ? cloneJson(before.fields) : {};
+      const prevSeq = club.changeSeq;
+      const result = applyMutation(ctx, m);
+      results.push(result);
+      if (club.changeSeq > prevSeq) changes.push(changeEntry(club.records[m.recordId]!, prevFields, m, result));
+    }
+    await this.write(em, p.clubId, club, locked.lastSeq, changes);
+    await saveDeviceSeq(em, p.clubId, deviceId, club.deviceSeq[deviceId] ?? deviceSeq, p.userId);
+    return { results, lastSeq: club.deviceSeq[deviceId] ?? deviceSeq };
+  }
+
+  /** The club's current records that the batch names; ids that belong to another club are set apart. */
+  private async loadTouched(em: EntityManager, clubId: string, mutations: Mutation[]) {
+    const byKind = new Map<RecordKind, Set<string>>();
+    for (const m of mutations) (byKind.get(m.kind) ?? byKind.set(m.kind, new Set()).get(m.kind)!).add(m.recordId);
+    const records: Record<string, StoredRecord> = {};
+    const foreign = new Set<string>();
+    for (const [kind, ids] of byKind) {
+      for (const r of await recordStore.loadMany(em, kind, [...ids])) {
+        if (r.clubId === clubId) records[r.id] = r;
+        else foreign.add(r.id);
+      }
+    }
+    return { records, foreign };
+  }
+
+  private async write(em: EntityManager, clubId: string, club: ClubState, startSeq: number, changes: ChangeEntry[]) {
+    if (club.changeSeq === startSeq && !club.conflicts.length) return;
+    const changed = new Map<RecordKind, StoredRecord[]>();
+    for (const r of Object.values(club.records)) {
+      if (r.changeSeq > startSeq) (changed.get(r.kind) ?? changed.set(r.kind, []).get(r.kind)!).push(r);
+    }
+    for (const [kind, recs] of changed) await recordStore.upsertMany(em, kind, recs);
+    await appendChanges(em, clubId, changes);
+    await insertConflicts(em, club.conflicts);
+    await saveClubSeq(em, clubId, club.changeSeq);
+  }
+}
+
+/** What one accepted mutation wrote, for the change log and the record's history. */
+function changeEntry(rec: StoredRecord, prev: Record<string, unknown>, m: Mutation, result: MutationResult): ChangeEntry {
+  const patch: Record<string, unknown> = {};
+  for (const [k, v] of Object.entries(rec.fields)) if (!deepEqual(prev[k], v)) patch[k] = v;
+  return {
+    seq: rec.changeSeq, kind: rec.kind, recordId: rec.id, version: rec.version, mutationId: m.mutationId,
+    deviceId: rec.lastActor.deviceId, userId: rec.lastActor.userId, hlc: m.hlc, patch, deleted: rec.deleted, status: result.status,
+  };
+}

@@ -1,0 +1,12 @@
+import { Injectable, type PipeTransform } from '@nestjs/common';
+
+/**
+ * Passes a body through untouched: sync bodies are checked by sync-protocol's own schemas, so the
+ * global class-validator pipe (which needs a DTO class) must not strip them.
+ */
+@Injectable()
+export class RawBody implements PipeTransform {
+  transform(value: unknown) {
+    return value;
+  }
+}

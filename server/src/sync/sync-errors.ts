@@ -1,0 +1,19 @@
+import { SyncRequestError } from '@breakline/sync-protocol';
+import { AppError, type ErrorCode } from '../common/app-error.js';
+import { PROTOCOL_VERSION } from '@breakline/sync-protocol';
+
+const CODES: Record<number, ErrorCode> = { 400: 'validation_failed', 403: 'forbidden', 404: 'not_found', 409: 'conflict', 426: 'protocol_outdated' };
+
+/** The shared rules throw SyncRequestError; the API answers with its usual error body. */
+export function toAppError(e: unknown): unknown {
+  if (e instanceof SyncRequestError) return new AppError(e.httpStatus, CODES[e.httpStatus] ?? 'validation_failed', e.message);
+  return e;
+}
+
+/** An outdated app gets 426 before anything else is read, so it updates and then syncs. */
+export function assertProtocol(body: unknown) {
+  const v = (body as { protocolVersion?: unknown } | null)?.protocolVersion;
+  if (v !== PROTOCOL_VERSION) {
+    throw new AppError(426, 'protocol_outdated', `This app speaks sync protocol ${String(v ?? 'unknown')}; the server speaks ${PROTOCOL_VERSION}. The app will update itself; then sync again.`);
+  }
+}
