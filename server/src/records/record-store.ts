@@ -57,10 +57,11 @@ export const recordStore = {
     let highest = 0;
     let count = 0;
     for (const kind of ALL_KINDS) {
-      const rows: { change_seq: string }[] = await em.query(
-        `DELETE FROM ${q(tableOf(kind))} WHERE club_id = $1 AND deleted AND updated_at < $2 RETURNING change_seq`, [clubId, before]);
-      for (const r of rows) highest = Math.max(highest, Number(r.change_seq));
-      count += rows.length;
+      const [row]: { n: number; hi: string }[] = await em.query(
+        `WITH gone AS (DELETE FROM ${q(tableOf(kind))} WHERE club_id = $1 AND deleted AND updated_at < $2 RETURNING change_seq)
+         SELECT count(*)::int AS n, coalesce(max(change_seq), 0) AS hi FROM gone`, [clubId, before]);
+      highest = Math.max(highest, Number(row!.hi));
+      count += row!.n;
     }
     return { highest, count };
   },
