@@ -48,19 +48,19 @@ const DEFECT_NAMES = 'boat_id, motor_id, check_id, item_id, severity, descriptio
 
 /**
  * The floor to compare against: each batch in one statement that numbers the changes under the
- * club's row lock, upserts with a version check, and writes the change log — no validation,
- * no merge, no HTTP.
+ * club's row lock, upserts with a version check, and writes the change log with each change's
+ * values — no validation, no merge, no HTTP.
  */
 export async function baselinePush(client, club, batches) {
   let changes = 0;
   const t0 = performance.now();
   for (const mutations of batches) {
     const rows = mutations.map((m, i) => ({
-      id: m.recordId, ord: i + 1, hlc: m.hlc, base_version: m.baseVersion,
+      id: m.recordId, ord: i + 1, hlc: m.hlc, base_version: m.baseVersion, patch: m.patch,
       ...Object.fromEntries(Object.entries(m.patch).map(([k, v]) => [k.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`), v])),
     }));
     const res = await client.query(
-      `WITH input AS (SELECT * FROM jsonb_to_recordset($2::jsonb) AS x(id uuid, ord int, hlc text, base_version int, ${DEFECT_COLS})),
+      `WITH input AS (SELECT * FROM jsonb_to_recordset($2::jsonb) AS x(id uuid, ord int, hlc text, base_version int, patch jsonb, ${DEFECT_COLS})),
        st AS (UPDATE sync_club_state SET last_seq = last_seq + (SELECT count(*) FROM input) WHERE club_id = $1
               RETURNING last_seq - (SELECT count(*) FROM input) AS base),
        up AS (INSERT INTO defects (id, club_id, version, hlc, updated_at, updated_by, device_id, deleted, change_seq, field_stamps, ${DEFECT_NAMES})
@@ -69,8 +69,9 @@ export async function baselinePush(client, club, batches) {
               ON CONFLICT (id) DO UPDATE SET version = EXCLUDED.version, hlc = EXCLUDED.hlc, change_seq = EXCLUDED.change_seq, description = EXCLUDED.description
               WHERE defects.version = EXCLUDED.version - 1
               RETURNING id, change_seq, version, hlc)
+       -- the log keeps what each change wrote, as the product's log does
        INSERT INTO sync_changes (club_id, seq, kind, record_id, version, device_id, user_id, hlc, patch, deleted, status)
-       SELECT $1, change_seq, 'defect', id, version, 'baseline', $3, hlc, '{}', false, 'applied' FROM up`,
+       SELECT $1, up.change_seq, 'defect', up.id, up.version, 'baseline', $3, up.hlc, i.patch, false, 'applied' FROM up JOIN input i ON i.id = up.id`,
       [club.clubId, JSON.stringify(rows), club.userId]);
     changes += res.rowCount;
   }

@@ -2,11 +2,12 @@
 import { spawn } from 'node:child_process';
 import { sleep } from './run.mjs';
 
-export async function startServer(repo, env) {
+export async function startServer(repo, env, echo = false) {
   let out = '';
   const child = spawn('node', ['server/dist/main.js'], { cwd: repo, env });
   child.stdout.on('data', (d) => (out += d));
   child.stderr.on('data', (d) => (out += d));
+  if (echo) child.stdout.pipe(process.stdout);
   const baseUrl = `http://127.0.0.1:${env.PORT}`;
   for (let i = 0; i < 150; i++) {
     if (child.exitCode !== null) throw new Error(`The server exited while starting:\n${out}`);

@@ -33,8 +33,8 @@ export class ErrorFilter implements ExceptionFilter {
       const raw = err.getResponse();
       const msg = typeof raw === 'string' ? raw : (raw as { message?: unknown }).message;
       if (status === 413) return this.tooLarge();
-      // Express's JSON parser failure reaches here as a bare "Bad Request".
-      if (status === 400 && msg === 'Bad Request') return { statusCode: 400, code: 'validation_failed', message: 'The request body is not valid JSON.' };
+      // The JSON body parser's failure reaches here as a 400 carrying the parser's own words.
+      if (status === 400 && typeof msg === 'string' && (msg === 'Bad Request' || /JSON/.test(msg))) return { statusCode: 400, code: 'validation_failed', message: 'The request body is not valid JSON.' };
       const message = PLAIN[status] ?? (typeof msg === 'string' ? msg : err.message);
       return { statusCode: status, code: CODE_BY_STATUS[status] ?? 'internal_error', message };
     }

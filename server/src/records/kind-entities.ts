@@ -14,6 +14,7 @@ function kindEntity(kind: RecordKind) {
     hlc: { type: 'text' },
     updatedAt: { name: 'updated_at', type: 'timestamptz' },
     updatedBy: { name: 'updated_by', type: 'uuid' },
+    updatedRole: { name: 'updated_role', type: 'text', nullable: true },
     deviceId: { name: 'device_id', type: 'text' },
     deleted: { type: 'boolean', default: false },
     changeSeq: { name: 'change_seq', type: 'bigint' },

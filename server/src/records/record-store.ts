@@ -5,7 +5,7 @@ import { recordToRow, rowToRecord, type Row } from './record-rows.js';
 
 const SYNC_COLUMNS: [string, string][] = [
   ['id', 'uuid'], ['club_id', 'uuid'], ['version', 'int'], ['hlc', 'text'], ['updated_at', 'timestamptz'],
-  ['updated_by', 'uuid'], ['device_id', 'text'], ['deleted', 'boolean'], ['change_seq', 'bigint'], ['field_stamps', 'jsonb'],
+  ['updated_by', 'uuid'], ['updated_role', 'text'], ['device_id', 'text'], ['deleted', 'boolean'], ['change_seq', 'bigint'], ['field_stamps', 'jsonb'],
 ];
 
 const columnsOf = (kind: RecordKind): [string, string][] => [...SYNC_COLUMNS, ...fieldColumns(kind).map((c): [string, string] => [c.column, c.type])];
