@@ -32,4 +32,5 @@ export * from './testing/memory-server.js';
 // The record kinds are the contract for these names; derive/ declares the same values.
 export { TRIP_PURPOSES, type TripPurpose } from './kinds/trip.js';
 export { OPEN_DEFECT_STATUSES } from './kinds/defect.js';
+export * from './templates/index.js';
 export * from './derive/index.js';

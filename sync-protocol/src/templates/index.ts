@@ -1,0 +1,3 @@
+export * from './cautions.js';
+export * from './launch-template.js';
+export * from './stow-template.js';
