@@ -4,6 +4,7 @@ import { Club } from '../clubs/club.entity.js';
 import { Membership } from '../clubs/membership.entity.js';
 import { User } from '../users/user.entity.js';
 import { DEMO_CLUBS, DEMO_PASSWORD } from './demo-scenario.js';
+import { seedDemoRecords } from './demo-records.js';
 
 /** Writes the demo scenario; running it again changes nothing that is already there. */
 export async function seedDemo(db: DataSource): Promise<{ created: number }> {
@@ -22,5 +23,16 @@ export async function seedDemo(db: DataSource): Promise<{ created: number }> {
       }
     }
   });
+  created += await seedGannetBayRecords(db);
   return { created };
+}
+
+/** The first demo club gets a fleet and its history; the second stays empty, as a new club is. */
+async function seedGannetBayRecords(db: DataSource): Promise<number> {
+  const club = await db.getRepository(Club).findOneOrFail({ where: { slug: 'gannet-bay' } });
+  const id = async (email: string) => (await db.getRepository(User).findOneOrFail({ where: { email } })).id;
+  return seedDemoRecords(db, club.id, {
+    admin: await id('admin@gannetbay.example'), captain: await id('captain@gannetbay.example'),
+    driver: await id('driver@gannetbay.example'), crew: await id('crew@gannetbay.example'),
+  });
 }

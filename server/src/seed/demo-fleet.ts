@@ -1,0 +1,29 @@
+// The demo club's boats and motors: invented names and serials. Pressure ranges are demo
+// figures standing in for a maker's specification, which a real club enters from its manual.
+import type { KindFields } from '@breakline/sync-protocol';
+import { demoId } from './demo-ids.js';
+
+const chambers = (min: number, max: number) => [
+  { id: 'port', name: 'port side pontoon', valve: 'port valve, aft', minKpa: min, maxKpa: max },
+  { id: 'starboard', name: 'starboard side pontoon', valve: 'starboard valve, aft', minKpa: min, maxKpa: max },
+  { id: 'bow', name: 'bow chamber', valve: 'bow valve', minKpa: min, maxKpa: max },
+];
+
+const gear = [
+  { item: 'rescue tube', count: 1 }, { item: 'paddle', count: 2 }, { item: 'tow rope', count: 1 },
+  { item: 'knife', count: 1 }, { item: 'whistle', count: 1 }, { item: 'life jacket', count: 2 }, { item: 'waterproof radio', count: 1 },
+];
+
+export const BOATS: { id: string; fields: KindFields['boat'] }[] = [
+  { id: demoId('boat:1'), fields: { fleetNumber: 'IRB 1', name: 'Shearwater', hullSerial: 'GB-HUL-2209', airChambers: chambers(17, 24), requiredGear: gear, notes: 'Main patrol boat.', inService: true } },
+  { id: demoId('boat:2'), fields: { fleetNumber: 'IRB 2', name: 'Petrel', hullSerial: 'GB-HUL-1874', airChambers: chambers(17, 24), requiredGear: gear, notes: 'Training and second boat.', inService: true } },
+];
+
+export function motors(today: string): { id: string; fields: KindFields['motor'] }[] {
+  const base = { powerHp: 25, serviceIntervalHours: 50, serviceIntervalMonths: 12, fuelMode: 'premix' as const, premixRatio: 50 };
+  return [
+    { id: demoId('motor:1'), fields: { ...base, serial: 'TM25-40117', model: 'demo 25 hp two-stroke', hourMeter: 231.4, lastServiceAt: '2026-08-20T00:00:00Z', lastServiceHours: 190.0, boatId: BOATS[0]!.id } },
+    { id: demoId('motor:2'), fields: { ...base, serial: 'TM25-38842', model: 'demo 25 hp two-stroke', hourMeter: 312.9, lastServiceAt: '2025-11-02T00:00:00Z', lastServiceHours: 262.0, boatId: BOATS[1]!.id } },
+    { id: demoId('motor:3'), fields: { ...base, serial: 'TM25-41930', model: 'demo 25 hp two-stroke (spare)', hourMeter: 88.2, lastServiceAt: `${today}T00:00:00Z`, lastServiceHours: 88.2, boatId: null } },
+  ];
+}
