@@ -7,7 +7,8 @@ import { ConfigError, validateEnv } from './config/env.js';
 
 async function bootstrap() {
   const env = validateEnv(process.env);
-  const app = await NestFactory.create<NestExpressApplication>(AppModule, { abortOnError: false });
+  const logger = env.NODE_ENV === 'development' ? undefined : (['error', 'warn'] as const);
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, { abortOnError: false, ...(logger ? { logger: [...logger] } : {}) });
   configureApp(app, env);
   app.enableShutdownHooks();
   await app.listen(env.PORT, env.HOST);
