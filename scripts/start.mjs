@@ -7,6 +7,7 @@ import { buildAll } from './lib/build.mjs';
 import { startPostgres } from './lib/postgres.mjs';
 import { dataRoot, localSecrets } from './lib/data-dir.mjs';
 import { isPortFree } from './lib/ports.mjs';
+import { startS3Fake } from './lib/s3-fake.mjs';
 import { fail, run, startChild } from './lib/run.mjs';
 
 const repo = fileURLToPath(new URL('..', import.meta.url));
@@ -20,8 +21,12 @@ buildAll(repo);
 const root = dataRoot(repo);
 const secrets = localSecrets(root);
 const pg = await startPostgres({ root: join(root, 'postgres'), port: pgPort, database: 'breakline', password: secrets.dbPassword });
+const s3 = await startS3Fake({ dir: join(root, 'photos'), port: Number(process.env.BREAKLINE_S3_PORT ?? 5545) }).catch((e) => {
+  pg.stop();
+  fail(e.message);
+});
 const env = {
-  ...process.env, DATABASE_URL: pg.url, JWT_SECRET: secrets.jwtSecret, PORT: String(port), HOST: '127.0.0.1',
+  ...process.env, DATABASE_URL: pg.url, S3_ENDPOINT: s3.endpoint, S3_BUCKET: s3.bucket, JWT_SECRET: secrets.jwtSecret, PORT: String(port), HOST: '127.0.0.1',
   CLIENT_DIST: join(repo, 'client', 'dist'), NODE_ENV: 'production',
 };
 
@@ -29,7 +34,7 @@ let server;
 const shutdown = (code = 0) => {
   if (server && server.exitCode === null) server.kill('SIGTERM');
   pg.stop();
-  process.exit(code);
+  s3.stop().finally(() => process.exit(code));
 };
 process.on('SIGINT', () => shutdown(0));
 process.on('SIGTERM', () => shutdown(0));

@@ -10,6 +10,7 @@ import { buildAll } from './lib/build.mjs';
 import { startPostgres } from './lib/postgres.mjs';
 import { freePort } from './lib/ports.mjs';
 import { runSuite } from './lib/suites.mjs';
+import { startS3Fake } from './lib/s3-fake.mjs';
 
 const repo = fileURLToPath(new URL('..', import.meta.url));
 const reports = join(repo, '.tmp', 'reports');
@@ -21,7 +22,8 @@ buildAll(repo);
 
 const pgRoot = mkdtempSync(join(tmpdir(), 'breakline-test-pg-'));
 const pg = await startPostgres({ root: pgRoot, port: await freePort(), database: 'breakline_test', password: 'breakline-test', fast: true });
-const cleanup = () => { pg.stop(); rmSync(pgRoot, { recursive: true, force: true }); };
+const s3 = await startS3Fake({ dir: join(pgRoot, 'photos') });
+const cleanup = () => { pg.stop(); s3.stop().catch(() => {}); rmSync(pgRoot, { recursive: true, force: true }); };
 process.on('SIGINT', () => { cleanup(); process.exit(130); });
 
 const base = { ...process.env, CHROMIUM_PATH: chromium, FORCE_COLOR: process.env.CI ? '0' : process.env.FORCE_COLOR };
@@ -39,7 +41,7 @@ try {
     { cwd: join(repo, 'server'), env: { ...base, DATABASE_URL: pg.url }, report: r }));
   r = join(reports, 'browser.json');
   results.push(runSuite('browser (Chromium, built app, real server)', 'node', vitest(null, 'client/e2e/vitest.e2e.config.ts', r),
-    { cwd: repo, env: { ...base, E2E_DATABASE_URL: pg.addDatabase('breakline_e2e') }, report: r }));
+    { cwd: repo, env: { ...base, E2E_DATABASE_URL: pg.addDatabase('breakline_e2e'), E2E_S3_ENDPOINT: s3.endpoint, E2E_S3_BUCKET: s3.bucket }, report: r }));
 } finally {
   cleanup();
 }

@@ -7,6 +7,7 @@ import { AuthModule } from './auth/auth.module.js';
 import { ClubsModule } from './clubs/clubs.module.js';
 import { UsersModule } from './users/users.module.js';
 import { SyncModule } from './sync/sync.module.js';
+import { AttachmentsModule } from './attachments/attachments.module.js';
 import { HealthController } from './health/health.controller.js';
 
 @Module({
@@ -20,6 +21,7 @@ import { HealthController } from './health/health.controller.js';
     ClubsModule,
     AuthModule,
     SyncModule,
+    AttachmentsModule,
   ],
   controllers: [HealthController],
 })

@@ -26,6 +26,7 @@ export async function startServer(): Promise<RunningServer> {
   const env = {
     ...process.env, DATABASE_URL: url, PORT: String(port), HOST: '127.0.0.1', NODE_ENV: 'test',
     JWT_SECRET: 'e2e-secret-e2e-secret-e2e-secret-e2e', CLIENT_DIST: join(repo, 'client', 'dist'),
+    ...(process.env.E2E_S3_ENDPOINT ? { S3_ENDPOINT: process.env.E2E_S3_ENDPOINT, S3_BUCKET: process.env.E2E_S3_BUCKET } : {}),
   };
   for (const cli of ['migrate', 'seed']) {
     const r = spawnSync('node', [`server/dist/cli/${cli}.js`], { cwd: repo, env, encoding: 'utf8' });

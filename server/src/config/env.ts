@@ -1,8 +1,8 @@
 // Reads and validates the server's settings once at start-up. A bad or missing setting stops the
 // server with the whole list of what to fix, rather than failing later on first use.
 import 'reflect-metadata';
-import { plainToInstance, Type } from 'class-transformer';
-import { IsIn, IsInt, IsOptional, IsString, Matches, Max, Min, MinLength, validateSync } from 'class-validator';
+import { plainToInstance, Transform, Type } from 'class-transformer';
+import { IsBoolean, IsIn, IsInt, IsOptional, IsString, IsUrl, Matches, Max, Min, MinLength, ValidateIf, validateSync } from 'class-validator';
 
 export class Env {
   @Matches(/^postgres(ql)?:\/\/.+/, { message: 'DATABASE_URL must be a postgres:// connection string' })
@@ -37,6 +37,33 @@ export class Env {
 
   @IsOptional() @IsString()
   CLIENT_DIST?: string;
+
+  // Photo storage over the S3 API. Without S3_ENDPOINT (unset or empty) the photo routes answer 503
+  // and the rest of the server runs.
+  @IsOptional() @Transform(({ value }) => (value === '' ? undefined : value)) @IsUrl({ require_tld: false, require_protocol: true, protocols: ['http', 'https'] }, { message: 'S3_ENDPOINT must be an http:// or https:// address, e.g. http://127.0.0.1:4568' })
+  S3_ENDPOINT?: string;
+
+  @IsOptional() @Matches(/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/, { message: 'S3_BUCKET must be 3 to 63 lower-case letters, digits, dots or hyphens' })
+  S3_BUCKET = 'breakline-photos';
+
+  @IsOptional() @Matches(/^[a-z]{2}(-[a-z0-9]+)+$/, { message: 'S3_REGION must be a region name such as us-east-1' })
+  S3_REGION = 'us-east-1';
+
+  // A key id needs its secret and the other way round; with neither, a loopback fake gets its
+  // own well-known keys and a real endpoint gets the SDK's usual credential chain.
+  @ValidateIf((e: Env) => e.S3_SECRET_ACCESS_KEY !== undefined) @IsString({ message: 'S3_ACCESS_KEY_ID must be set when S3_SECRET_ACCESS_KEY is' }) @MinLength(1)
+  S3_ACCESS_KEY_ID?: string;
+
+  @ValidateIf((e: Env) => e.S3_ACCESS_KEY_ID !== undefined) @IsString({ message: 'S3_SECRET_ACCESS_KEY must be set when S3_ACCESS_KEY_ID is' }) @MinLength(1)
+  S3_SECRET_ACCESS_KEY?: string;
+
+  // Path-style addressing is what local fakes and most S3-compatible stores expect.
+  @IsOptional() @Transform(({ value }) => (typeof value === 'string' ? ({ true: true, false: false } as Record<string, boolean>)[value.toLowerCase()] ?? value : value))
+  @IsBoolean({ message: 'S3_FORCE_PATH_STYLE must be true or false' })
+  S3_FORCE_PATH_STYLE = true;
+
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(100)
+  PHOTO_MAX_MB = 8;
 
   @IsOptional() @IsIn(['development', 'production', 'test'])
   NODE_ENV: 'development' | 'production' | 'test' = 'development';
