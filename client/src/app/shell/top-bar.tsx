@@ -5,6 +5,7 @@ import Toolbar from '@mui/material/Toolbar';
 import Typography from '@mui/material/Typography';
 import LightModeOutlined from '@mui/icons-material/LightModeOutlined';
 import { useSession } from '@/features/auth/use-auth';
+import { SyncStatus } from '@/sync/components/sync-status';
 import { useThemeMode } from '../theme-mode';
 import { AccountMenu } from './account-menu';
 
@@ -28,6 +29,7 @@ export function TopBar({ desktop }: { desktop: boolean }) {
         <Typography variant="body2" noWrap sx={{ maxWidth: desktop ? 240 : '34vw', textAlign: 'right' }}>
           {user.displayName}
         </Typography>
+        <SyncStatus />
         {/* No tooltip: it needs a long press on a phone, and the label is read out anyway. */}
         <IconButton
           color="inherit"

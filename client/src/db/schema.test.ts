@@ -1,0 +1,39 @@
+import { describe, expect, it } from 'vitest';
+import { defectFields } from '@/sync/test/device';
+import { LATEST_VERSION, ReplicaDb } from './schema';
+import type { RecordRow } from './types';
+
+const BOAT = defectFields().boatId;
+
+function v1Row(id: string, fields: Record<string, unknown>): Omit<RecordRow, 'boatId'> {
+  return { id, kind: 'defect', clubId: 'club-saltmarsh', server: null, version: 0, fields, deleted: false, waiting: 1 };
+}
+
+describe('schema upgrades', () => {
+  it('opens a version 1 database with data and upgrades it to version 2, keeping the data', async () => {
+    const name = 'upgrade-v1-v2';
+    const old = new ReplicaDb(name, 1);
+    await old.open();
+    expect(old.verno).toBe(1);
+    await old.table('records').bulkPut([v1Row('r-1', defectFields()), v1Row('r-2', { fleetNumber: 'IRB 2' })]);
+    await old.table('outbox').put({ seq: 1, clubId: 'club-saltmarsh', recordId: 'r-1', kind: 'defect', status: 'pending', mutation: { seq: 1 } });
+    await old.table('syncState').put({ key: 'club:club-saltmarsh', clubId: 'club-saltmarsh', gen: 1, checkpoint: '42' });
+    old.close();
+
+    const db = new ReplicaDb(name);
+    await db.open();
+    expect(db.verno).toBe(LATEST_VERSION);
+    expect(LATEST_VERSION).toBe(2);
+    expect(await db.records.count()).toBe(2);
+    expect(await db.outbox.count()).toBe(1);
+    expect(await db.syncState.get('club:club-saltmarsh')).toMatchObject({ checkpoint: '42' });
+    // The upgrade step filled the new index from the version 1 rows.
+    const forBoat = await db.records.where('[clubId+kind+boatId]').equals(['club-saltmarsh', 'defect', BOAT]).toArray();
+    expect(forBoat.map((r) => r.id)).toEqual(['r-1']);
+    expect((await db.records.get('r-2'))!.boatId).toBeUndefined();
+    // Tables new in version 2 exist and are empty.
+    expect(await db.photos.count()).toBe(0);
+    expect(await db.rejected.count()).toBe(0);
+    db.close();
+  });
+});

@@ -1,0 +1,60 @@
+import Dexie, { type EntityTable, type Table, type Transaction } from 'dexie';
+import type { ConflictSeenRow, OutboxRow, PhotoRow, RecordRow, RejectedRow, SyncStateRow } from './types';
+
+/**
+ * Every version of the phone's store, oldest first. A version, once shipped, never changes:
+ * phones upgrade through each step in order, so a new need is a new version with its own step.
+ * One database a person (see open.ts), so a shared phone never shows one member another's records.
+ */
+export const SCHEMA_VERSIONS = [
+  {
+    version: 1,
+    stores: {
+      // Screens list a club's records of a kind; the sweep after a reset walks a club's records.
+      records: 'id, [clubId+kind]',
+      // seq is the per-device order the server applies; the push reads a club's pending ones in order.
+      outbox: 'seq, recordId, [clubId+status]',
+      syncState: 'key',
+    },
+  },
+  {
+    version: 2,
+    stores: {
+      // Boat file and Today list a boat's checks, trips and defects.
+      records: 'id, [clubId+kind], [clubId+kind+boatId]',
+      photos: 'sha256, [clubId+uploaded]',
+      rejected: 'mutationId, clubId',
+      conflictsSeen: 'id, clubId',
+    },
+    // Rows written by version 1 have no boatId beside their fields; copy it out for the new index.
+    upgrade: (tx: Transaction) =>
+      tx
+        .table<RecordRow>('records')
+        .toCollection()
+        .modify((row) => {
+          const boatId = row.fields?.boatId;
+          if (typeof boatId === 'string') row.boatId = boatId;
+        }),
+  },
+] as const;
+
+export const LATEST_VERSION = SCHEMA_VERSIONS[SCHEMA_VERSIONS.length - 1]!.version;
+
+export class ReplicaDb extends Dexie {
+  records!: EntityTable<RecordRow, 'id'>;
+  outbox!: EntityTable<OutboxRow, 'seq'>;
+  syncState!: Table<SyncStateRow, string>;
+  photos!: EntityTable<PhotoRow, 'sha256'>;
+  rejected!: EntityTable<RejectedRow, 'mutationId'>;
+  conflictsSeen!: EntityTable<ConflictSeenRow, 'id'>;
+
+  /** `upTo` exists for the upgrade test, which must write a database as an older app did. */
+  constructor(name: string, upTo: number = LATEST_VERSION) {
+    super(name);
+    for (const step of SCHEMA_VERSIONS) {
+      if (step.version > upTo) break;
+      const v = this.version(step.version).stores(step.stores);
+      if ('upgrade' in step) v.upgrade(step.upgrade);
+    }
+  }
+}

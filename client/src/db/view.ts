@@ -1,0 +1,58 @@
+import { overlayPending, type LocalView, type RecordKind, type SyncRecord } from '@breakline/sync-protocol';
+import type { ReplicaDb } from './schema';
+import type { OutboxRow, RecordRow } from './types';
+
+/** An accepted change stays on top only until the pulled copy reaches the version it made. */
+export function stillShown(entry: OutboxRow, server: SyncRecord | null): boolean {
+  return entry.status === 'pending' || (server?.version ?? 0) < (entry.ackVersion ?? Infinity);
+}
+
+/** The row a screen reads: the server's copy with the queued edits reapplied in seq order. */
+export function composeRow(
+  base: { id: string; kind: RecordKind; clubId: string; server: SyncRecord | null; gen?: number },
+  entries: readonly OutboxRow[],
+): RecordRow | undefined {
+  const shown = entries.filter((e) => stillShown(e, base.server)).sort((a, b) => a.seq - b.seq);
+  const changes = shown.map((e) => ({ patch: e.mutation.patch, deleted: e.mutation.deleted }));
+  const view = overlayPending(base.id, base.kind, base.server ?? undefined, changes);
+  if (!view) return undefined;
+  const row: RecordRow = {
+    id: base.id,
+    kind: base.kind,
+    clubId: base.clubId,
+    server: base.server,
+    version: view.version,
+    fields: view.fields,
+    deleted: view.deleted,
+    waiting: shown.filter((e) => e.status === 'pending').length,
+  };
+  if (base.gen !== undefined) row.gen = base.gen;
+  if (typeof view.fields.boatId === 'string') row.boatId = view.fields.boatId;
+  return row;
+}
+
+export function toLocalView(row: RecordRow): LocalView {
+  return { id: row.id, kind: row.kind, version: row.version, fields: row.fields, deleted: row.deleted, pending: row.waiting };
+}
+
+/**
+ * Recomposes the rows of `recordIds` from what the tables hold now. Call inside a rw transaction
+ * on records and outbox. A record with neither a server copy nor a queued change is removed
+ * (a refused create), the refusal itself being kept in the rejected list.
+ */
+export async function recomposeRows(db: ReplicaDb, recordIds: readonly string[]): Promise<void> {
+  const ids = [...new Set(recordIds)];
+  const rows = await db.records.bulkGet(ids);
+  const entries = await db.outbox.where('recordId').anyOf(ids).toArray();
+  const puts: RecordRow[] = [];
+  const gone: string[] = [];
+  ids.forEach((id, i) => {
+    const row = rows[i];
+    if (!row) return;
+    const next = composeRow(row, entries.filter((e) => e.recordId === id));
+    if (next) puts.push(next);
+    else gone.push(id);
+  });
+  await db.records.bulkPut(puts);
+  await db.records.bulkDelete(gone);
+}

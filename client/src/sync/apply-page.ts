@@ -1,0 +1,62 @@
+import { decodeHlc, HybridClock, type PullResponse, type SyncRecord } from '@breakline/sync-protocol';
+import { clubRows } from '@/db/queries';
+import { loadClubState, loadReplica, updateClubState } from '@/db/replica-state';
+import type { ReplicaDb } from '@/db/schema';
+import type { OutboxRow, RecordRow, ReplicaRow } from '@/db/types';
+import { composeRow, recomposeRows, stillShown } from '@/db/view';
+
+/** The clock follows what others wrote, so this phone's next edit is ordered after what it saw. */
+function receiveClocks(replica: ReplicaRow, changes: readonly SyncRecord[], now: number): ReplicaRow {
+  // No drift limit here: the server already refused clocks far ahead, and a phone whose own time
+  // is behind must still move past what it has seen.
+  const clock = new HybridClock(replica.deviceId, { initial: replica.clock, maxDriftMs: Number.POSITIVE_INFINITY });
+  for (const c of changes) {
+    try {
+      clock.receive(decodeHlc(c.hlc), now);
+    } catch {
+      // A malformed clock on one record must not stop the page; ordering only loses a tie-break.
+    }
+  }
+  return { ...replica, clock: clock.current() };
+}
+
+/** After the last page: every accepted change is in the pulled copies now; a reset sweeps the rest. */
+async function finishPull(db: ReplicaDb, clubId: string, sweepBelow: number | undefined): Promise<void> {
+  const acked = await db.outbox.where('[clubId+status]').equals([clubId, 'acked']).toArray();
+  await db.outbox.bulkDelete(acked.map((e) => e.seq));
+  await recomposeRows(db, acked.map((e) => e.recordId));
+  if (sweepBelow === undefined) return;
+  const stale = await clubRows(db, clubId).filter((r) => (r.gen ?? 0) < sweepBelow).toArray();
+  const held = new Set((await db.outbox.where('recordId').anyOf(stale.map((r) => r.id)).toArray()).map((e) => e.recordId));
+  await db.records.bulkDelete(stale.filter((r) => !held.has(r.id)).map((r) => r.id));
+}
+
+/**
+ * Writes one page with bulkPut and moves the checkpoint in the same transaction, so a page is
+ * either all in with its checkpoint or not at all. Queued edits are laid on top of each pulled
+ * copy before it is written, so a screen never sees the edit disappear and come back.
+ */
+export async function applyPullPage(db: ReplicaDb, clubId: string, page: PullResponse, now: number): Promise<void> {
+  await db.transaction('rw', db.records, db.outbox, db.syncState, async () => {
+    const state = await loadClubState(db, clubId);
+    const changes = page.changes.filter((c) => c.clubId === clubId);
+    const ids = changes.map((c) => c.id);
+    const existing = await db.records.bulkGet(ids);
+    const entries = await db.outbox.where('recordId').anyOf(ids).toArray();
+    const rows: RecordRow[] = [];
+    const done: OutboxRow[] = [];
+    changes.forEach((change, i) => {
+      const prev = existing[i]?.server;
+      const server = prev && prev.version > change.version ? prev : change;
+      const mine = entries.filter((e) => e.recordId === change.id);
+      done.push(...mine.filter((e) => !stillShown(e, server)));
+      const row = composeRow({ id: change.id, kind: change.kind, clubId, server, gen: state.gen }, mine);
+      if (row) rows.push(row);
+    });
+    await db.records.bulkPut(rows);
+    await db.outbox.bulkDelete(done.map((e) => e.seq));
+    await db.syncState.put(receiveClocks(await loadReplica(db, now), changes, now));
+    if (!page.hasMore) await finishPull(db, clubId, state.sweepBelow);
+    await updateClubState(db, clubId, { checkpoint: page.checkpoint, sweepBelow: page.hasMore ? state.sweepBelow : undefined });
+  });
+}

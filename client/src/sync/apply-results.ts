@@ -1,0 +1,54 @@
+import type { MutationResult, PushResponse } from '@breakline/sync-protocol';
+import type { ReplicaDb } from '@/db/schema';
+import type { ConflictSeenRow, OutboxRow, RejectedRow } from '@/db/types';
+import { recomposeRows, stillShown } from '@/db/view';
+
+function rejectedRow(entry: OutboxRow, r: MutationResult, at: string): RejectedRow {
+  const row: RejectedRow = {
+    mutationId: entry.mutation.mutationId,
+    clubId: entry.clubId,
+    recordId: entry.recordId,
+    kind: entry.kind,
+    patch: entry.mutation.patch,
+    error: r.error ?? { code: 'invalid', message: 'The server refused this change without saying why.' },
+    at,
+  };
+  if (entry.mutation.deleted) row.deleted = true;
+  return row;
+}
+
+/**
+ * Marks a batch's answers in one transaction. Accepted changes (applied, merged, conflict, and a
+ * duplicate whose record exists) leave the queue but stay shown until the pull brings their
+ * version; a refused one moves to the rejected list; one the server did not answer stays queued.
+ */
+export async function applyPushResults(db: ReplicaDb, batch: readonly OutboxRow[], response: PushResponse, at: string): Promise<void> {
+  const byId = new Map(batch.map((e) => [e.mutation.mutationId, e]));
+  await db.transaction('rw', [db.records, db.outbox, db.rejected, db.conflictsSeen], async () => {
+    const touched: string[] = [];
+    for (const r of response.results) {
+      const entry = byId.get(r.mutationId);
+      if (!entry) continue;
+      touched.push(entry.recordId);
+      if (r.status === 'rejected') {
+        await db.rejected.put(rejectedRow(entry, r, at));
+        await db.outbox.delete(entry.seq);
+        continue;
+      }
+      if (r.version === undefined) {
+        await db.outbox.delete(entry.seq); // a duplicate of a change that never made a record
+        continue;
+      }
+      const acked: OutboxRow = { ...entry, status: 'acked', ackVersion: r.version };
+      const server = (await db.records.get(entry.recordId))?.server ?? null;
+      if (stillShown(acked, server)) await db.outbox.put(acked);
+      else await db.outbox.delete(entry.seq);
+      const conflictIds = r.conflictIds ?? (r.conflictId ? [r.conflictId] : []);
+      const seen: ConflictSeenRow[] = conflictIds.map((id) => ({
+        id, clubId: entry.clubId, recordId: entry.recordId, kind: entry.kind, mutationId: r.mutationId, at,
+      }));
+      await db.conflictsSeen.bulkPut(seen);
+    }
+    await recomposeRows(db, touched);
+  });
+}

@@ -1,0 +1,52 @@
+import type { Role } from '@breakline/sync-protocol';
+import { apiAuth, getFreshAccessToken } from '@/features/auth/session';
+import { tokenStore } from '@/features/auth/token-store';
+
+/** Whose replica a sync works on, and for which club: the access token names one membership. */
+export interface SyncScope {
+  userId: string;
+  clubId: string;
+  role: Role;
+}
+
+/** What the sync engine needs from whoever holds the session (the auth feature in the app). */
+export interface SyncAuth {
+  scope(): SyncScope | null;
+  /** A token for `scope`; null when signed out; throws ApiError network_error when offline. */
+  token(scope: SyncScope): Promise<string | null>;
+  /** After a 401 with `rejected`: one refresh; the new token, or null when the session is over. */
+  afterUnauthorized(scope: SyncScope, rejected: string): Promise<string | null>;
+  sessionLost(): void;
+}
+
+/** The person switched club or account while a sync ran; its answers belong to another replica. */
+export class ScopeChangedError extends Error {
+  constructor() {
+    super('The signed-in person or club changed during the sync.');
+    this.name = 'ScopeChangedError';
+  }
+}
+
+function currentScope(): SyncScope | null {
+  const s = tokenStore.getState().session;
+  return s ? { userId: s.user.id, clubId: s.activeClub.id, role: s.activeClub.role } : null;
+}
+
+/**
+ * A token is only used when the session it came from is still the scope's: a club-1 outbox sent
+ * with a club-2 token would be written into club 2.
+ */
+function forScope(scope: SyncScope, token: string | null): string | null {
+  if (!token) return null;
+  const now = currentScope();
+  if (!now) return null;
+  if (now.userId !== scope.userId || now.clubId !== scope.clubId) throw new ScopeChangedError();
+  return token;
+}
+
+export const sessionAuth: SyncAuth = {
+  scope: currentScope,
+  token: async (scope) => forScope(scope, await getFreshAccessToken()),
+  afterUnauthorized: async (scope, rejected) => forScope(scope, await apiAuth.refreshAfterUnauthorized(rejected)),
+  sessionLost: () => apiAuth.sessionLost(),
+};

@@ -1,0 +1,95 @@
+import { act, render, screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { afterEach, describe, expect, it } from 'vitest';
+import { closeReplicas, openReplica } from '@/db/open';
+import { createRecord, updateRecord } from '@/db/write';
+import { tokenStore } from '@/features/auth/token-store';
+import { sessionAnswer } from '@/test/fixtures';
+import { syncActivity } from '../activity';
+import { STORAGE_NOT_PERSISTED } from '../persist';
+import { SyncRunner } from '../runner';
+import { FakeBackend } from '../test/fake-backend';
+import { defectFields, testDevice } from '../test/device';
+import { SyncStatus } from './sync-status';
+
+function setUp(role: 'crew' | 'driver' = 'driver') {
+  const backend = new FakeBackend();
+  backend.now = Date.now(); // the component words "ago" against the real clock
+  tokenStore.saveSession(sessionAnswer(role));
+  backend.grant('access-1', { userId: 'u-1', role, clubId: 'c-1' });
+  const scope = { userId: 'u-1', clubId: 'c-1', role };
+  const runner = new SyncRunner({
+    auth: { scope: () => scope, token: async () => 'access-1', afterUnauthorized: async () => null, sessionLost: () => undefined },
+    openDb: openReplica,
+    fetch: backend.fetch,
+    now: () => backend.now,
+    onOutdated: () => undefined,
+    setTimer: () => 0,
+    clearTimer: () => undefined,
+  });
+  const writer = { db: openReplica('u-1'), ...scope, now: () => backend.now };
+  return { backend, runner, writer };
+}
+
+afterEach(async () => {
+  syncActivity.set({ storage: 'unknown' });
+  await openReplica('u-1').delete();
+  closeReplicas();
+});
+
+describe('sync status', () => {
+  it('shows changes waiting and no signal, then all sent after "Sync now"', async () => {
+    const { backend, runner, writer } = setUp();
+    await createRecord(writer, 'defect', defectFields());
+    await createRecord(writer, 'defect', defectFields({ description: 'Tiller grip split' }));
+    backend.offline = true;
+    render(<SyncStatus runner={runner} />);
+    await act(() => runner.idle());
+    const button = await screen.findByRole('button', { name: 'Sync: No signal' });
+    expect(within(button).getByText('2')).toBeInTheDocument();
+    const user = userEvent.setup();
+    await user.click(button);
+    const dialog = screen.getByRole('dialog', { name: 'Sync' });
+    expect(within(dialog).getByText('2 changes waiting to be sent')).toBeInTheDocument();
+    expect(within(dialog).getByText('Not synced yet on this phone')).toBeInTheDocument();
+    expect(within(dialog).getByText(/^No signal\. Changes stay on this phone/)).toBeInTheDocument();
+
+    backend.offline = false;
+    await user.click(within(dialog).getByRole('button', { name: 'Sync now' }));
+    await act(() => runner.idle());
+    expect(await within(dialog).findByText('All changes sent')).toBeInTheDocument();
+    expect(within(dialog).getByText(/^Last synced /)).toBeInTheDocument();
+    expect(within(dialog).queryByText(/No signal/)).toBeNull();
+  });
+
+  it('lists a refused change with the server message until dismissed, and open conflicts', async () => {
+    const { backend, runner, writer } = setUp();
+    const id = await createRecord(writer, 'defect', defectFields());
+    await runner.requestSync();
+    const ben = testDevice(backend, 'member-ben', 'driver', 'c-1');
+    await ben.sync();
+    await updateRecord(ben.writer, 'defect', id, { description: 'Strap frayed at both ends' });
+    await ben.sync();
+    await updateRecord(writer, 'defect', id, { description: 'Strap frayed, one end only' });
+    backend.grant('access-1', { userId: 'u-1', role: 'crew', clubId: 'c-1' }); // role lowered on the server
+    await updateRecord(writer, 'defect', id, { status: 'repaired' });
+    render(<SyncStatus runner={runner} />);
+    await act(() => runner.idle());
+    const user = userEvent.setup();
+    await user.click(await screen.findByRole('button', { name: /^Sync:/ }));
+    const refused = await screen.findByText(/Your change to a defect \(status\) was not saved\. Only a driver, supervisor or admin/);
+    expect(screen.getByText(/^1 conflict waiting for a supervisor/)).toBeInTheDocument();
+    await user.click(within(refused.closest('[role="alert"]') as HTMLElement).getByRole('button', { name: 'Dismiss' }));
+    await waitFor(() => expect(screen.queryByText(/was not saved/)).toBeNull());
+  });
+
+  it('says what a refused persistent-storage request means', async () => {
+    const { runner } = setUp();
+    render(<SyncStatus runner={runner} />);
+    await act(() => runner.idle());
+    act(() => syncActivity.set({ storage: 'refused' }));
+    await userEvent.setup().click(await screen.findByRole('button', { name: /^Sync:/ }));
+    expect(screen.getByText(STORAGE_NOT_PERSISTED)).toBeInTheDocument();
+    expect(STORAGE_NOT_PERSISTED).toMatch(/may clear changes not yet sent if the phone runs short of space or the app is not used for days/);
+  });
+});

@@ -1,0 +1,85 @@
+import { describe, expect, it } from 'vitest';
+import { getRecord } from '@/db/queries';
+import { closeReplicas, openReplica } from '@/db/open';
+import { createRecord, updateRecord } from '@/db/write';
+import { tokenStore } from '@/features/auth/token-store';
+import { sessionAnswer } from '@/test/fixtures';
+import { sessionAuth } from './auth-source';
+import { syncOnce } from './engine';
+import { FakeBackend } from './test/fake-backend';
+import { defectFields, testDevice } from './test/device';
+
+describe('sync failures', () => {
+  it('on 426 asks for an update and stops with the outbox intact', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend);
+    await createRecord(ana.writer, 'defect', defectFields());
+    backend.outdated = true;
+    expect(await ana.sync()).toMatchObject({ ok: false, failure: { reason: 'outdated', message: expect.stringMatching(/out of date/) } });
+    expect(ana.outdatedCalls).toBe(1);
+    expect((await ana.db.outbox.toArray()).map((e) => e.status)).toEqual(['pending']);
+    expect(backend.server.records(ana.scope.clubId)).toEqual([]);
+    expect(backend.requests.filter((r) => r.path === '/api/sync/pull')).toEqual([]);
+  });
+
+  it('keeps the outbox of a person whose refresh is refused, and says they are signed out', async () => {
+    const backend = new FakeBackend();
+    const session = sessionAnswer('driver', { accessExpiresAt: '2000-01-01T00:00:00Z' });
+    tokenStore.saveSession(session);
+    const scope = sessionAuth.scope()!;
+    const db = openReplica(scope.userId);
+    await createRecord({ db, ...scope }, 'defect', defectFields());
+    backend.routes['POST /api/auth/refresh'] = () =>
+      new Response(JSON.stringify({ statusCode: 401, code: 'unauthorized', message: 'Refresh token refused.' }), { status: 401 });
+    const fetchOf = globalThis.fetch;
+    globalThis.fetch = backend.fetch; // the refresh goes through apiRequest and the global fetch
+    try {
+      const outcome = await syncOnce({ db, scope, auth: sessionAuth, fetch: backend.fetch, now: () => backend.now, onOutdated: () => undefined });
+      expect(outcome).toMatchObject({ ok: false, failure: { reason: 'signed-out' } });
+    } finally {
+      globalThis.fetch = fetchOf;
+    }
+    expect(tokenStore.getState().session).toBeNull();
+    expect(await db.outbox.count()).toBe(1);
+    expect(backend.requests.map((r) => r.path)).toEqual(['/api/auth/refresh']);
+    expect(await db.syncState.get(`club:${scope.clubId}`)).toMatchObject({ lastError: { reason: 'signed-out' } });
+    await db.delete();
+    closeReplicas();
+  });
+
+  it('keeps the outbox and says "no signal" when offline', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend);
+    await createRecord(ana.writer, 'defect', defectFields());
+    backend.offline = true;
+    expect(await ana.sync()).toMatchObject({ ok: false, failure: { reason: 'offline', message: expect.stringMatching(/^No signal/) } });
+    expect(await ana.db.outbox.count()).toBe(1);
+  });
+
+  it('moves a refused change to the rejected list with the server message, and shows the server value again', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend);
+    const id = await createRecord(ana.writer, 'defect', defectFields());
+    await ana.sync();
+    // The phone's role was driver when it saved; the server now knows her as crew only.
+    backend.grant('token-crew', { userId: 'member-ana', role: 'crew', clubId: ana.scope.clubId });
+    await updateRecord(ana.writer, 'defect', id, { status: 'repaired' });
+    ana.auth.token = async () => 'token-crew';
+    expect(await ana.sync()).toEqual({ ok: true });
+    expect(await ana.db.outbox.count()).toBe(0);
+    const [rejected] = await ana.db.rejected.toArray();
+    expect(rejected).toMatchObject({ recordId: id, kind: 'defect', patch: { status: 'repaired' }, error: { code: 'forbidden' } });
+    expect(rejected!.error.message).toMatch(/driver, supervisor or admin/);
+    expect(await getRecord(ana.db, ana.scope.clubId, 'defect', id)).toMatchObject({ waiting: 0, fields: { status: 'open' } });
+  });
+
+  it('drops a refused new record from the lists but keeps its fields in the rejected list', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend);
+    // The phone's clock runs an hour fast, so the server refuses the change's clock stamp.
+    const id = await createRecord({ ...ana.writer, now: () => backend.now + 60 * 60_000 }, 'defect', defectFields());
+    await ana.sync();
+    expect(await getRecord(ana.db, ana.scope.clubId, 'defect', id)).toBeNull();
+    expect(await ana.db.rejected.toArray()).toMatchObject([{ recordId: id, patch: defectFields(), error: { code: 'clock-drift' } }]);
+  });
+});

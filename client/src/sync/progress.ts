@@ -1,0 +1,6 @@
+/** What a long sync is doing now, for "n of m" in the status. */
+export type SyncProgress =
+  | { phase: 'sending'; done: number; total: number }
+  | { phase: 'receiving'; done: number; more: boolean };
+
+export type ProgressListener = (progress: SyncProgress) => void;

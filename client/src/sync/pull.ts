@@ -1,0 +1,63 @@
+import type { PullResponse } from '@breakline/sync-protocol';
+import { loadClubState, updateClubState } from '@/db/replica-state';
+import type { ReplicaDb } from '@/db/schema';
+import { ApiError } from '@/lib/api-error';
+import { applyPullPage } from './apply-page';
+import type { ProgressListener } from './progress';
+import { syncRequest, type TransportContext } from './transport';
+
+/** A page of 1,000 is one IndexedDB transaction of about a quarter second on a phone. */
+export const PULL_PAGE = 1000;
+
+export const RESET_LOOP =
+  'The server asked this phone to start its copy afresh twice in one sync. Changes stay on this phone; tell your club admin.';
+
+export interface PullContext extends TransportContext {
+  db: ReplicaDb;
+  now: () => number;
+  pageSize?: number;
+  onProgress?: ProgressListener;
+}
+
+function isPullResponse(value: unknown): value is PullResponse {
+  const v = value as PullResponse | null;
+  return typeof v === 'object' && v !== null && Array.isArray(v.changes) && typeof v.checkpoint === 'string' && typeof v.hasMore === 'boolean';
+}
+
+/**
+ * A reset keeps the rows on screen: it raises the generation and pulls from the start, and when
+ * the last page lands, rows the new pull did not bring (and no queued edit holds) are swept.
+ * Clearing first would show empty lists for the length of a full sync.
+ */
+async function startReset(db: ReplicaDb, clubId: string): Promise<void> {
+  await db.transaction('rw', db.syncState, async () => {
+    const state = await loadClubState(db, clubId);
+    const gen = state.gen + 1;
+    await updateClubState(db, clubId, { gen, sweepBelow: gen, checkpoint: undefined });
+  });
+}
+
+/** Pulls pages until the server has nothing more; each page and its checkpoint commit together. */
+export async function pullAll(ctx: PullContext): Promise<void> {
+  const { db, scope } = ctx;
+  const limit = ctx.pageSize ?? PULL_PAGE;
+  let received = 0;
+  let resets = 0;
+  for (;;) {
+    const { checkpoint } = await loadClubState(db, scope.clubId);
+    const query = new URLSearchParams({ limit: String(limit) });
+    if (checkpoint !== undefined) query.set('since', checkpoint);
+    const page = await syncRequest<unknown>(ctx, `/api/sync/pull?${query}`);
+    if (!isPullResponse(page)) throw new ApiError(200, 'bad_response', 'The server sent a pull answer Breakline cannot read.');
+    if (page.resetRequired) {
+      // Asked again while already pulling afresh: going on would pull for ever.
+      if (checkpoint === undefined || ++resets > 1) throw new ApiError(200, 'bad_response', RESET_LOOP);
+      await startReset(db, scope.clubId);
+      continue;
+    }
+    await applyPullPage(db, scope.clubId, page, ctx.now());
+    received += page.changes.length;
+    ctx.onProgress?.({ phase: 'receiving', done: received, more: page.hasMore });
+    if (!page.hasMore) return;
+  }
+}

@@ -1,0 +1,113 @@
+import { buildMutation, encodeHlc } from '@breakline/sync-protocol';
+import { describe, expect, it } from 'vitest';
+import { uuid7 } from '@/db/uuid7';
+import { getRecord, listRecords } from '@/db/queries';
+import { createRecord, updateRecord } from '@/db/write';
+import { FakeBackend } from './test/fake-backend';
+import { defectFields, testDevice } from './test/device';
+
+describe('push and pull', () => {
+  it('sends a change, then another phone pulls it; the outbox empties and versions move', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend, 'member-ana');
+    const ben = testDevice(backend, 'member-ben');
+    const id = await createRecord(ana.writer, 'defect', defectFields());
+    expect(await ana.sync()).toEqual({ ok: true });
+    expect(await ana.db.outbox.count()).toBe(0);
+    expect(await getRecord(ana.db, ana.scope.clubId, 'defect', id)).toMatchObject({ version: 1, waiting: 0 });
+    expect(backend.server.record(ana.scope.clubId, id)).toMatchObject({ version: 1, fields: defectFields() });
+
+    expect(await ben.sync()).toEqual({ ok: true });
+    expect(await getRecord(ben.db, ben.scope.clubId, 'defect', id)).toMatchObject({ version: 1, fields: defectFields() });
+    await updateRecord(ben.writer, 'defect', id, { actionTaken: 'Strap restitched' });
+    await ben.sync();
+    await ana.sync();
+    expect(await getRecord(ana.db, ana.scope.clubId, 'defect', id)).toMatchObject({ version: 2, fields: { actionTaken: 'Strap restitched' } });
+    expect(await ana.db.syncState.get('club:club-saltmarsh')).toMatchObject({ lastError: null, lastSyncAt: new Date(backend.now).toISOString() });
+  });
+
+  it('sends at most 500 changes a batch, gzip-compressed, and pulls page by page', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend);
+    // The outbox is filled in one bulk write, as 520 saves one by one would; only quicker to run.
+    await ana.db.outbox.bulkAdd(
+      Array.from({ length: 520 }, (_, i) => {
+        const recordId = uuid7(backend.now + i);
+        const patch = defectFields({ description: `Scuff ${i} on the hull` });
+        const mutation = buildMutation({
+          mutationId: uuid7(backend.now + i), seq: i + 1, hlc: encodeHlc({ l: backend.now, c: i, node: 'phone-ana' }),
+          view: undefined, kind: 'defect', recordId, patch,
+        });
+        return { seq: i + 1, clubId: ana.scope.clubId, recordId, kind: 'defect' as const, status: 'pending' as const, mutation };
+      }),
+    );
+    const progress: string[] = [];
+    await ana.sync({ pageSize: 200, onProgress: (p) => progress.push(p.phase === 'sending' ? `s${p.done}/${p.total}` : `r${p.done}`) });
+    const pushes = backend.requests.filter((r) => r.path === '/api/sync/push');
+    expect(pushes.map((p) => [p.mutations, p.gzip])).toEqual([[500, true], [20, true]]);
+    expect(backend.requests.filter((r) => r.path === '/api/sync/pull')).toHaveLength(3);
+    expect(progress).toEqual(['s0/520', 's500/520', 's520/520', 'r200', 'r400', 'r520']);
+    expect(await listRecords(ana.db, ana.scope.clubId, 'defect')).toHaveLength(520);
+    expect(await ana.db.outbox.count()).toBe(0);
+  });
+
+  it('keeps a local edit on top when a pull brings another change to the record', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend, 'member-ana');
+    const ben = testDevice(backend, 'member-ben');
+    const id = await createRecord(ana.writer, 'defect', defectFields());
+    await ana.sync();
+    await ben.sync();
+    await updateRecord(ben.writer, 'defect', id, { actionTaken: 'Strap restitched' });
+    await ben.sync();
+    // Ana edits another field offline, then only pulls: her edit is still what she sees.
+    await updateRecord(ana.writer, 'defect', id, { severity: 'stand-down' });
+    backend.offline = false;
+    const { pullAll } = await import('./pull');
+    await pullAll({ db: ana.db, scope: ana.scope, auth: ana.auth, fetch: backend.fetch, now: () => backend.now });
+    expect(await getRecord(ana.db, ana.scope.clubId, 'defect', id)).toMatchObject({
+      version: 2, waiting: 1, fields: { severity: 'stand-down', actionTaken: 'Strap restitched' },
+    });
+    await ana.sync();
+    expect(await getRecord(ana.db, ana.scope.clubId, 'defect', id)).toMatchObject({ version: 3, waiting: 0, fields: { severity: 'stand-down' } });
+  });
+
+  it('replays after a lost answer: the server says duplicate and nothing is doubled', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend);
+    const id = await createRecord(ana.writer, 'defect', defectFields());
+    await updateRecord(ana.writer, 'defect', id, { notes: [{ at: '2026-12-05T21:40:00Z', by: 'member-ana', text: 'Taped for now' }] });
+    backend.loseNextPushAnswer = true;
+    expect(await ana.sync()).toMatchObject({ ok: false, failure: { reason: 'offline' } });
+    expect(await ana.db.outbox.count()).toBe(2);
+    expect(backend.server.record(ana.scope.clubId, id)!.version).toBe(2);
+
+    const answers: string[] = [];
+    const spying: typeof fetch = async (input, init) => {
+      const res = await backend.fetch(input, init);
+      if (String(input).endsWith('/push')) answers.push(...((await res.clone().json()) as { results: { status: string }[] }).results.map((r) => r.status));
+      return res;
+    };
+    expect(await ana.sync({ fetch: spying })).toEqual({ ok: true });
+    expect(answers).toEqual(['duplicate', 'duplicate']);
+    expect(backend.server.record(ana.scope.clubId, id)).toMatchObject({ version: 2, fields: { notes: [{ text: 'Taped for now' }] } });
+    expect(backend.server.records(ana.scope.clubId)).toHaveLength(1);
+    expect(await ana.db.outbox.count()).toBe(0);
+    expect(await getRecord(ana.db, ana.scope.clubId, 'defect', id)).toMatchObject({ version: 2, waiting: 0 });
+  });
+
+  it('still shows an accepted edit between the push and the pull that brings it back', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend);
+    const id = await createRecord(ana.writer, 'defect', defectFields());
+    await ana.sync();
+    await updateRecord(ana.writer, 'defect', id, { severity: 'stand-down' });
+    const { pushOutbox } = await import('./push');
+    await pushOutbox({ db: ana.db, scope: ana.scope, auth: ana.auth, fetch: backend.fetch, now: () => backend.now });
+    expect(await ana.db.outbox.where('[clubId+status]').equals([ana.scope.clubId, 'pending']).count()).toBe(0);
+    expect(await getRecord(ana.db, ana.scope.clubId, 'defect', id)).toMatchObject({ version: 1, waiting: 0, fields: { severity: 'stand-down' } });
+    await ana.sync();
+    expect(await ana.db.outbox.count()).toBe(0);
+    expect(await getRecord(ana.db, ana.scope.clubId, 'defect', id)).toMatchObject({ version: 2, fields: { severity: 'stand-down' } });
+  });
+});

@@ -1,0 +1,41 @@
+import { describe, expect, it } from 'vitest';
+import { headline, lastSyncText, progressText, rejectedTitle, relativeTime, waitingText } from './status-text';
+import type { SyncStatus } from './status';
+
+const NOW = Date.parse('2026-12-06T09:00:00Z');
+const idle: SyncStatus = {
+  waiting: 0, lastSyncAt: null, lastError: null, openConflicts: 0, rejected: [], raisedConflicts: [],
+  running: false, progress: null, storage: 'persisted',
+};
+
+describe('sync status words', () => {
+  it('says how long ago, in whole units', () => {
+    expect(relativeTime('2026-12-06T08:59:30Z', NOW)).toBe('just now');
+    expect(relativeTime('2026-12-06T08:59:00Z', NOW)).toBe('1 minute ago');
+    expect(relativeTime('2026-12-06T06:10:00Z', NOW)).toBe('2 hours ago');
+    expect(relativeTime('2026-12-03T08:00:00Z', NOW)).toBe('3 days ago');
+    expect(relativeTime('2026-12-06T09:05:00Z', NOW)).toBe('just now');
+  });
+
+  it('counts changes waiting and shows progress as n of m', () => {
+    expect(waitingText(0)).toBe('All changes sent');
+    expect(waitingText(1)).toBe('1 change waiting to be sent');
+    expect(progressText({ running: true, progress: { phase: 'sending', done: 500, total: 1200 } })).toBe('Sending changes: 500 of 1,200');
+    expect(progressText({ running: true, progress: { phase: 'receiving', done: 2000, more: true } })).toBe('Receiving changes: 2,000 so far');
+    expect(progressText({ running: false, progress: null })).toBeNull();
+    expect(lastSyncText(null, NOW)).toBe('Not synced yet on this phone');
+  });
+
+  it('puts a failure before the count, and the count before the last sync', () => {
+    const failure = { reason: 'signed-out' as const, message: 'Signed out. Sign in again.', at: '2026-12-06T08:00:00Z' };
+    expect(headline({ ...idle, waiting: 3, lastError: failure }, NOW)).toBe('Signed out');
+    expect(headline({ ...idle, waiting: 3 }, NOW)).toBe('3 changes waiting to be sent');
+    expect(headline({ ...idle, lastSyncAt: '2026-12-06T08:30:00Z' }, NOW)).toBe('Last synced 30 minutes ago');
+  });
+
+  it('names the record kind and fields of a refused change', () => {
+    const base = { mutationId: 'm', clubId: 'c', recordId: 'r', kind: 'trip' as const, error: { code: 'forbidden' as const, message: 'x' }, at: '' };
+    expect(rejectedTitle({ ...base, patch: { windSpeedKn: 30 } })).toBe('Your change to a trip (wind speed (knots)) was not saved.');
+    expect(rejectedTitle({ ...base, patch: {}, deleted: true })).toBe('Deleting a trip was not done.');
+  });
+});
