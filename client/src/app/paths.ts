@@ -11,10 +11,35 @@ export const paths = {
     href: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
   },
   reviewDesk: { path: '/review', href: () => '/review' },
+  boatFile: { path: '/boats/:boatId', href: (boatId: string) => `/boats/${encodeURIComponent(boatId)}` },
+  fleet: { path: '/fleet', href: () => '/fleet' },
+  /** `new` as the id opens an empty form. */
+  boatEdit: { path: '/fleet/boats/:boatId', href: (boatId: string = 'new') => `/fleet/boats/${encodeURIComponent(boatId)}` },
+  motorEdit: { path: '/fleet/motors/:motorId', href: (motorId: string = 'new') => `/fleet/motors/${encodeURIComponent(motorId)}` },
+  checkStart: {
+    path: '/checks/start',
+    href: (start: { type?: 'launch' | 'stow'; boatId?: string } = {}) => withQuery('/checks/start', { type: start.type, boat: start.boatId }),
+  },
+  /** `section`: the 1-based screen of the runner to open; without it the runner opens where the check was left. */
+  checkRun: {
+    path: '/checks/run/:checkId',
+    href: (checkId: string, section?: number) => withQuery(`/checks/run/${encodeURIComponent(checkId)}`, { section }),
+  },
+  defectNew: { path: '/defects/new', href: (boatId?: string) => withQuery('/defects/new', { boat: boatId }) },
+  defectFile: { path: '/defects/:defectId', href: (defectId: string) => `/defects/${encodeURIComponent(defectId)}` },
   admin: { path: '/admin', href: () => '/admin' },
 } as const;
 
-export type RouteName = keyof typeof paths;
+function withQuery(path: string, query: Record<string, string | number | undefined>): string {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) if (value !== undefined) params.set(key, String(value));
+  const text = params.toString();
+  return text ? `${path}?${text}` : path;
+}
+
+type Paths = typeof paths;
+/** Routes a menu can link to as they are: those whose link needs no id. */
+export type RouteName = { [K in keyof Paths]: [] extends Parameters<Paths[K]['href']> ? K : never }[keyof Paths];
 
 /** Only in-app paths are followed after sign-in, so a link cannot send someone off-site. */
 export function safeNextPath(next: string | null): string {

@@ -2,7 +2,7 @@ import type { ReplicaDb } from './schema';
 import type { PhotoRow } from './types';
 
 async function sha256Hex(bytes: ArrayBuffer): Promise<string> {
-  const digest = new Uint8Array(await crypto.subtle.digest('SHA-256', bytes));
+  const digest = new Uint8Array(await crypto.subtle.digest('SHA-256', new Uint8Array(bytes)));
   return Array.from(digest, (b) => b.toString(16).padStart(2, '0')).join('');
 }
 

@@ -1,6 +1,6 @@
 import Typography from '@mui/material/Typography';
-import { EmptyState } from '@/components/empty-state';
 import { PageHeader } from '@/components/page-header';
+import { TodayBoard } from '@/features/boats/components/today-board';
 import { useSession } from '@/features/auth/use-auth';
 
 function clubDate(timeZone: string): string {
@@ -17,13 +17,10 @@ export function TodayPage() {
   return (
     <>
       <PageHeader title="Today" subtitle={`${activeClub.name} · ${clubDate(activeClub.timeZone)}`} />
-      <EmptyState title="No boats yet">
-        When the club admin adds the club's boats, each one shows here with its state for the day, who is signed on
-        and what needs doing next.
-      </EmptyState>
-      <Typography variant="body2" color="text.secondary" sx={{ mt: 3 }}>
+      <TodayBoard />
+      <Typography variant="body2" sx={{ color: 'text.secondary', mt: 3 }}>
         Breakline records and reminds; it does not decide. The club's procedures, the manufacturer's manual and the
-        patrol captain's call come first.
+        patrol captain's call come first. A stood-down boat is not launched until a competent person returns it to service.
       </Typography>
     </>
   );

@@ -52,7 +52,7 @@ describe('app shell', () => {
     expect(within(banner).getByText('Breakline')).toBeInTheDocument();
     expect(within(banner).getByText('Saltmarsh Heads Surf Club')).toBeInTheDocument();
     expect(within(banner).getByText('Ria Okafor')).toBeInTheDocument();
-    expect(screen.getByText('No boats yet')).toBeInTheDocument();
+    expect(await screen.findByText('No boats yet')).toBeInTheDocument();
   });
 
   it('follows a role change from the server', async () => {

@@ -99,7 +99,7 @@ describe('sign-in form', () => {
 
     answer({ status: 200, body: sessionAnswer('driver', { accessToken: 'a-9', refreshToken: 'r-9' }) });
     expect(await screen.findByRole('heading', { name: 'Today' })).toBeInTheDocument();
-    expect(screen.getByText('No boats yet')).toBeInTheDocument();
+    expect(await screen.findByText('No boats yet')).toBeInTheDocument();
     const stored = JSON.parse(localStorage.getItem(STORAGE_KEY) ?? 'null');
     expect(stored).toMatchObject({ accessToken: 'a-9', refreshToken: 'r-9', activeClub: { role: 'driver' } });
   });

@@ -1,0 +1,13 @@
+import { useParams } from 'react-router-dom';
+import { useRecord } from '@/db/hooks';
+import { BoatFile } from '@/features/boats/components/boat-file';
+import { RecentChecks } from '@/features/checks/components/recent-checks';
+import { BoatDefects } from '@/features/defects/components/boat-defects';
+
+/** The boat file, with the defects and checks features' parts in their places. */
+export function BoatFilePage() {
+  const { boatId = '' } = useParams();
+  const boat = useRecord('boat', boatId);
+  const name = boat?.fields.name ?? 'this boat';
+  return <BoatFile boatId={boatId} defects={<BoatDefects boatId={boatId} boatName={name} />} checks={<RecentChecks boatId={boatId} />} />;
+}

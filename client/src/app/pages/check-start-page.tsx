@@ -1,0 +1,5 @@
+import { CheckStart } from '@/features/checks/components/check-start';
+
+export function CheckStartPage() {
+  return <CheckStart />;
+}

@@ -1,0 +1,5 @@
+import { FleetList } from '@/features/boats/editor/fleet-list';
+
+export function FleetPage() {
+  return <FleetList />;
+}

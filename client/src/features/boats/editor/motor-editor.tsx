@@ -1,0 +1,32 @@
+import Box from '@mui/material/Box';
+import CircularProgress from '@mui/material/CircularProgress';
+import { kindSpec, roleAtLeast } from '@breakline/sync-protocol';
+import { useNavigate } from 'react-router-dom';
+import { paths } from '@/app/paths';
+import { EmptyState } from '@/components/empty-state';
+import { PageHeader } from '@/components/page-header';
+import { useRecord } from '@/db/hooks';
+import { useSession } from '@/features/auth/use-auth';
+import { motorDraftOf, newMotorDraft } from './motor-draft';
+import { MotorForm } from './motor-form';
+import { ReadOnlyNote } from './read-only-note';
+
+export function MotorEditor({ motorId }: { motorId: string }) {
+  const isNew = motorId === 'new';
+  const motor = useRecord('motor', isNew ? undefined : motorId);
+  const { activeClub } = useSession();
+  const navigate = useNavigate();
+  const access = kindSpec('motor').access;
+  const editable = roleAtLeast(activeClub.role, isNew ? access.create : access.update);
+  if (!isNew && motor === undefined) return <CircularProgress aria-label="Loading the motor" />;
+  if (!isNew && motor === null) return <EmptyState title="This motor is not on this phone">It may have been removed, or not synced here yet.</EmptyState>;
+  if (isNew && !editable) return <ReadOnlyNote what="the fleet" />;
+  const initial = motor ? motorDraftOf(motor.fields, activeClub.timeZone) : newMotorDraft();
+  return (
+    <Box sx={{ display: 'grid', gap: 2 }}>
+      <PageHeader title={motor ? `Motor ${motor.fields.serial}` : 'New motor'} subtitle="Motor specification and service" />
+      {!editable && <ReadOnlyNote what="this motor's record" />}
+      <MotorForm key={motor?.id ?? 'new'} motorId={motor?.id ?? null} fittedTo={motor?.fields.boatId ?? null} initial={initial} editable={editable} onSaved={() => navigate(paths.fleet.href())} />
+    </Box>
+  );
+}

@@ -1,0 +1,54 @@
+import Box from '@mui/material/Box';
+import MenuItem from '@mui/material/MenuItem';
+import TextField from '@mui/material/TextField';
+import type { LocalRecord } from '@/db/types';
+import type { DraftErrors } from './boat-draft';
+import type { MotorDraft } from './motor-draft';
+
+type Key = Exclude<keyof MotorDraft, 'fuelMode' | 'storedService'>;
+
+interface Props {
+  draft: MotorDraft;
+  errors: DraftErrors;
+  boats: readonly LocalRecord<'boat'>[];
+  set: (change: Partial<MotorDraft>) => void;
+}
+
+export function MotorFields({ draft, errors, boats, set }: Props) {
+  const box = (field: Key, label: string, inputMode?: 'decimal' | 'numeric', type?: string) => (
+    <TextField
+      label={label}
+      type={type}
+      value={draft[field]}
+      onChange={(e) => set({ [field]: e.target.value })}
+      error={Boolean(errors[field])}
+      helperText={errors[field]}
+      slotProps={{ htmlInput: { inputMode }, inputLabel: type === 'date' ? { shrink: true } : undefined }}
+    />
+  );
+  return (
+    <Box sx={{ display: 'grid', gap: 2 }}>
+      {box('serial', 'Serial number')}
+      {box('model', 'Make and model')}
+      {box('powerHp', 'Power (hp)', 'decimal')}
+      {box('hourMeter', 'Hour meter (h)', 'decimal')}
+      {box('intervalHours', 'Service every (engine hours)', 'decimal')}
+      {box('intervalMonths', 'Service every (months)', 'numeric')}
+      {box('lastServiceDate', 'Last service date', undefined, 'date')}
+      {box('lastServiceHours', 'Hour meter at last service (h)', 'decimal')}
+      <TextField select label="Fuel" value={draft.fuelMode} onChange={(e) => set({ fuelMode: e.target.value as MotorDraft['fuelMode'] })}>
+        <MenuItem value="premix">Premix (oil mixed into the petrol)</MenuItem>
+        <MenuItem value="oil-injection">Oil injection</MenuItem>
+      </TextField>
+      {draft.fuelMode === 'premix' && box('premixRatio', 'Premix ratio, petrol to oil (e.g. 50 for 50:1, from the manual)', 'decimal')}
+      <TextField select label="Fitted to" value={draft.boatId} onChange={(e) => set({ boatId: e.target.value })}>
+        <MenuItem value="">Not fitted (in the store)</MenuItem>
+        {boats.map((b) => (
+          <MenuItem key={b.id} value={b.id}>
+            {b.fields.fleetNumber} · {b.fields.name}
+          </MenuItem>
+        ))}
+      </TextField>
+    </Box>
+  );
+}

@@ -1,0 +1,37 @@
+import Box from '@mui/material/Box';
+import Button from '@mui/material/Button';
+import type { CheckOutcome } from '@breakline/sync-protocol';
+
+const LOOK: Record<CheckOutcome, { label: string; color: 'primary' | 'error' | 'inherit' }> = {
+  pass: { label: 'Pass', color: 'primary' },
+  fail: { label: 'Fail', color: 'error' },
+  na: { label: 'N/A', color: 'inherit' },
+};
+
+/** Big answer buttons for one wet thumb; the chosen one is filled and says so to a screen reader. */
+export function OutcomeButtons(props: {
+  value: CheckOutcome | undefined;
+  offer?: readonly CheckOutcome[];
+  disabled?: boolean;
+  onChoose: (o: CheckOutcome) => void;
+}) {
+  const offer = props.offer ?? ['pass', 'fail', 'na'];
+  return (
+    <Box sx={{ display: 'grid', gridTemplateColumns: offer.map((o) => (o === 'na' ? '0.7fr' : '1fr')).join(' '), gap: 1 }}>
+      {offer.map((o) => (
+        <Button
+          key={o}
+          size="large"
+          color={LOOK[o].color}
+          variant={props.value === o ? 'contained' : 'outlined'}
+          aria-pressed={props.value === o}
+          disabled={props.disabled}
+          onClick={() => props.onChoose(o)}
+          sx={{ minHeight: 56, fontSize: '1.1rem' }}
+        >
+          {LOOK[o].label}
+        </Button>
+      ))}
+    </Box>
+  );
+}

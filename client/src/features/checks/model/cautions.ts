@@ -1,0 +1,19 @@
+import { CAUTIONS } from '@breakline/sync-protocol';
+import type { TemplateSection } from './types';
+
+/**
+ * The safety reminders of a section: those its items carry, and the usual ones for its system,
+ * so a club template that lost a caution still shows it.
+ */
+export function sectionCautions(type: 'launch' | 'stow', section: TemplateSection): string[] {
+  const own = section.items.flatMap((i) => (i.caution ? [i.caution] : []));
+  const system = section.system.toLowerCase();
+  const usual: string[] = [];
+  if (system === 'motor') usual.push(type === 'launch' ? CAUTIONS.testRun : CAUTIONS.flush);
+  if (system === 'motor' && type === 'stow') usual.push(FLUSH_TIME);
+  if (system === 'fuel') usual.push(CAUTIONS.fuel);
+  return [...new Set([...own, ...usual])];
+}
+
+// Common practice, no source: the motor's manual gives the figure for that motor.
+export const FLUSH_TIME = 'Flush for three to five minutes, in neutral, hands clear of the propeller, unless the manual says otherwise.';
