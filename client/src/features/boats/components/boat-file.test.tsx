@@ -5,7 +5,7 @@ import { mockApi } from '@/test/api-mock';
 import { renderApp } from '@/test/render-app';
 import { PHONE_WIDTH, setViewportWidth } from '@/test/viewport';
 import { boatFields, defectFields, motorFields } from '../testing/records';
-import { testPerson } from '../testing/session';
+import { testPerson } from '@/test/test-person';
 
 describe('the boat file', () => {
   it('shows the state, chamber ranges in the club unit, the motor and its service, and open defects with what was done', async () => {

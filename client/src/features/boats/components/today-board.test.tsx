@@ -6,7 +6,7 @@ import { mockApi } from '@/test/api-mock';
 import { renderApp } from '@/test/render-app';
 import { PHONE_WIDTH, setViewportWidth } from '@/test/viewport';
 import { boatFields, defectFields, passedResults } from '../testing/records';
-import { testPerson } from '../testing/session';
+import { testPerson } from '@/test/test-person';
 
 async function seedBoat(seed: ReturnType<typeof testPerson>['seed'], fleetNumber: string, name: string) {
   return createRecord(seed, 'boat', boatFields({ fleetNumber, name }));

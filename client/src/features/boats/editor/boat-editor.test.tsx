@@ -7,7 +7,7 @@ import { mockApi } from '@/test/api-mock';
 import { renderApp } from '@/test/render-app';
 import { PHONE_WIDTH, setViewportWidth } from '@/test/viewport';
 import { boatFields } from '../testing/records';
-import { testPerson } from '../testing/session';
+import { testPerson } from '@/test/test-person';
 
 const PSI_KPA = 6.894757293168361; // NIST SP 811 (2008) B.8: 1 psi = 6.894 757 E+03 Pa
 

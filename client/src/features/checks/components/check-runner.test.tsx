@@ -8,7 +8,7 @@ import { mockApi } from '@/test/api-mock';
 import { renderApp } from '@/test/render-app';
 import { PHONE_WIDTH, setViewportWidth } from '@/test/viewport';
 import { seedBoatAndTemplates } from '../testing/boat';
-import { testPerson } from '../testing/session';
+import { testPerson } from '@/test/test-person';
 
 const item = (label: string) => within(screen.getByRole('region', { name: label }));
 

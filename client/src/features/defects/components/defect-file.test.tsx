@@ -8,7 +8,7 @@ import { mockApi } from '@/test/api-mock';
 import { renderApp } from '@/test/render-app';
 import { PHONE_WIDTH, setViewportWidth } from '@/test/viewport';
 import { defectFields } from '../testing/records';
-import { testPerson } from '../testing/session';
+import { testPerson } from '@/test/test-person';
 
 const STEPS = ['Assign the repair', 'Mark repaired', 'Verify and return to service', 'Reject: not a defect', 'Reopen'];
 

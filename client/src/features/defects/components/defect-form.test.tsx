@@ -6,7 +6,7 @@ import { createRecord } from '@/db/write';
 import { mockApi } from '@/test/api-mock';
 import { renderApp } from '@/test/render-app';
 import { PHONE_WIDTH, setViewportWidth } from '@/test/viewport';
-import { testPerson } from '../testing/session';
+import { testPerson } from '@/test/test-person';
 
 describe('reporting a defect on its own', () => {
   it('saves boat, severity, description and a photo kept on the phone by its hash', async () => {
