@@ -4,19 +4,20 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import pg from 'pg';
 import { ensureDependencies } from './lib/deps.mjs';
 import { buildAll } from './lib/build.mjs';
 import { startPostgres } from './lib/postgres.mjs';
 import { freePort } from './lib/ports.mjs';
 import { run } from './lib/run.mjs';
 import { startServer } from './lib/server.mjs';
-import { seedBenchClub, seedHistory } from './lib/bench-data.mjs';
-import { baselinePush, httpPush, mutationsFor, timePulls } from './lib/bench-sync-ops.mjs';
 
 const repo = fileURLToPath(new URL('..', import.meta.url));
 ensureDependencies(repo);
 buildAll(repo);
+// Loaded after the install above: a fresh clone has no node_modules until then.
+const { default: pg } = await import('pg');
+const { seedBenchClub, seedHistory } = await import('./lib/bench-data.mjs');
+const { baselinePush, httpPush, mutationsFor, timePulls } = await import('./lib/bench-sync-ops.mjs');
 
 const root = mkdtempSync(join(tmpdir(), 'breakline-bench-pg-'));
 const db = await startPostgres({ root, port: await freePort(), database: 'breakline_bench', password: 'bench' });

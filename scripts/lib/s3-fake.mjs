@@ -1,7 +1,6 @@
 // A local S3 fake for photos: s3rver on loopback, with the bucket made before the first request.
 // The server reaches it through the ordinary S3 client, so a real bucket replaces it by settings.
 import { mkdirSync } from 'node:fs';
-import S3rver from 's3rver';
 
 export const S3_FAKE_KEY = 'S3RVER';
 
@@ -15,6 +14,8 @@ export async function startS3Fake({ dir, port = 0, bucket = 'breakline-photos' }
   }
   if (!dir) throw new Error('startS3Fake needs a dir to keep the photos in.');
   mkdirSync(dir, { recursive: true });
+  // Loaded here, not at the top: the scripts import this file before they install dependencies.
+  const { default: S3rver } = await import('s3rver');
   const fake = new S3rver({ address: '127.0.0.1', port, directory: dir, silent: true, vhostBuckets: false, configureBuckets: [{ name: bucket }] });
   let addr;
   try {
