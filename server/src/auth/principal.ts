@@ -1,5 +1,5 @@
 import { createParamDecorator, ExecutionContext, SetMetadata } from '@nestjs/common';
-import type { Role } from '../common/roles.js';
+import type { Role } from '@breakline/sync-protocol';
 
 /** Who is calling, resolved from the access token and the membership it names. */
 export interface Principal { userId: string; clubId: string; role: Role; membershipId: string }

@@ -1,7 +1,7 @@
 import { CanActivate, ExecutionContext, Injectable } from '@nestjs/common';
 import { Reflector } from '@nestjs/core';
 import { AppError } from '../common/app-error.js';
-import { roleAtLeast, type Role } from '../common/roles.js';
+import { roleAtLeast, type Role } from '@breakline/sync-protocol';
 import { MIN_ROLE_KEY, type Principal } from './principal.js';
 
 /** Refuses a route whose @MinRole the caller's role in the active club does not reach. */

@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import type { Role } from '../common/roles.js';
+import type { Role } from '@breakline/sync-protocol';
 import { Club } from './club.entity.js';
 import { User } from '../users/user.entity.js';
 

@@ -21,3 +21,10 @@ export class AppError extends HttpException {
     super({ statusCode: status, code, message, ...(details ? { details } : {}) } satisfies ErrorBody, status);
   }
 }
+
+/** The code an error of this HTTP status carries when nothing more specific applies. */
+export const CODE_BY_STATUS: Readonly<Record<number, ErrorCode>> = {
+  400: 'validation_failed', 401: 'unauthorized', 403: 'forbidden', 404: 'not_found',
+  409: 'conflict', 413: 'payload_too_large', 415: 'unsupported_media_type', 426: 'protocol_outdated',
+  429: 'too_many_attempts', 503: 'storage_unavailable',
+};

@@ -1,12 +1,6 @@
 import { ArgumentsHost, Catch, ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import type { Response } from 'express';
-import { AppError, type ErrorBody, type ErrorCode } from './app-error.js';
-
-const CODE_BY_STATUS: Record<number, ErrorCode> = {
-  400: 'validation_failed', 401: 'unauthorized', 403: 'forbidden', 404: 'not_found',
-  409: 'conflict', 413: 'payload_too_large', 415: 'unsupported_media_type', 426: 'protocol_outdated',
-  429: 'too_many_attempts',
-};
+import { AppError, CODE_BY_STATUS, type ErrorBody } from './app-error.js';
 
 const PLAIN: Record<number, string> = {
   401: 'Sign in to continue.', 403: 'Your role in this club does not allow this.',

@@ -1,5 +1,5 @@
 // The demo scenario: an invented club and people, so a new install has something to show.
-import type { Role } from '../common/roles.js';
+import type { Role } from '@breakline/sync-protocol';
 
 export const DEMO_PASSWORD = 'surf-demo-2026';
 

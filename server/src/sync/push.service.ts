@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { DataSource, type EntityManager } from 'typeorm';
 import {
-  applyMutation, cloneJson, deepEqual, HybridClock, PushRequestSchema,
+  applyMutation, deepEqual, HybridClock, PushRequestSchema,
   type ClubState, type Mutation, type MutationResult, type PushResponse, type RecordKind, type StoredRecord,
 } from '@breakline/sync-protocol';
 import { AppError } from '../common/app-error.js';
@@ -57,7 +57,8 @@ export class PushService {
         continue;
       }
       const before = club.records[m.recordId];
-      const prevFields = before ? cloneJson(before.fields) : {};
+      // applyMutation replaces the record rather than changing it, so the old fields stay as they were.
+      const prevFields = before?.fields ?? {};
       const prevSeq = club.changeSeq;
       const result = applyMutation(ctx, m);
       results.push(result);

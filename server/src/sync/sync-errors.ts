@@ -1,12 +1,9 @@
-import { SyncRequestError } from '@breakline/sync-protocol';
-import { AppError, type ErrorCode } from '../common/app-error.js';
-import { PROTOCOL_VERSION } from '@breakline/sync-protocol';
-
-const CODES: Record<number, ErrorCode> = { 400: 'validation_failed', 403: 'forbidden', 404: 'not_found', 409: 'conflict', 426: 'protocol_outdated' };
+import { PROTOCOL_VERSION, SyncRequestError } from '@breakline/sync-protocol';
+import { AppError, CODE_BY_STATUS } from '../common/app-error.js';
 
 /** The shared rules throw SyncRequestError; the API answers with its usual error body. */
 export function toAppError(e: unknown): unknown {
-  if (e instanceof SyncRequestError) return new AppError(e.httpStatus, CODES[e.httpStatus] ?? 'validation_failed', e.message);
+  if (e instanceof SyncRequestError) return new AppError(e.httpStatus, CODE_BY_STATUS[e.httpStatus] ?? 'validation_failed', e.message);
   return e;
 }
 

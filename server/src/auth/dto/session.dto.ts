@@ -1,4 +1,4 @@
-import type { Role } from '../../common/roles.js';
+import type { Role } from '@breakline/sync-protocol';
 
 export interface UserDto { id: string; email: string; displayName: string }
 export interface ActiveClubDto {

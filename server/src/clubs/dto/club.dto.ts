@@ -1,4 +1,4 @@
-import type { Role } from '../../common/roles.js';
+import type { Role } from '@breakline/sync-protocol';
 
 export interface ClubDto {
   id: string; name: string; timeZone: string; latitude: number; longitude: number;
