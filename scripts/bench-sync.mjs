@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ensureDependencies } from './lib/deps.mjs';
-import { buildAll } from './lib/build.mjs';
+import { buildIfStale } from './lib/build.mjs';
 import { startPostgres } from './lib/postgres.mjs';
 import { freePort } from './lib/ports.mjs';
 import { run } from './lib/run.mjs';
@@ -13,7 +13,9 @@ import { startServer } from './lib/server.mjs';
 
 const repo = fileURLToPath(new URL('..', import.meta.url));
 ensureDependencies(repo);
-buildAll(repo);
+// The bench serves no pages, so the client is not built (a build is minutes on a small machine).
+const protocolBuilt = buildIfStale(repo, 'sync-protocol', ['sync-protocol/src', 'sync-protocol/package.json', 'tsconfig.base.json']);
+buildIfStale(repo, 'server', ['server/src', 'server/package.json', 'server/tsconfig.build.json'], { force: protocolBuilt });
 // Loaded after the install above: a fresh clone has no node_modules until then.
 const { default: pg } = await import('pg');
 const { seedBenchClub, seedHistory } = await import('./lib/bench-data.mjs');

@@ -11,6 +11,7 @@ import { startPostgres } from './lib/postgres.mjs';
 import { freePort } from './lib/ports.mjs';
 import { runSuite } from './lib/suites.mjs';
 import { startS3Fake } from './lib/s3-fake.mjs';
+import { startSmtpFake } from './lib/smtp-fake.mjs';
 
 const repo = fileURLToPath(new URL('..', import.meta.url));
 const reports = join(repo, '.tmp', 'reports');
@@ -23,7 +24,9 @@ buildAll(repo);
 const pgRoot = mkdtempSync(join(tmpdir(), 'breakline-test-pg-'));
 const pg = await startPostgres({ root: pgRoot, port: await freePort(), database: 'breakline_test', password: 'breakline-test', fast: true });
 const s3 = await startS3Fake({ dir: join(pgRoot, 'photos') });
-const cleanup = () => { pg.stop(); s3.stop().catch(() => {}); rmSync(pgRoot, { recursive: true, force: true }); };
+const smtp = await startSmtpFake({ dir: join(pgRoot, 'mail') });
+const mailEnv = { SMTP_HOST: smtp.host, SMTP_PORT: String(smtp.port), MAIL_CAUGHT_DIR: smtp.dir };
+const cleanup = () => { pg.stop(); s3.stop().catch(() => {}); smtp.stop().catch(() => {}); rmSync(pgRoot, { recursive: true, force: true }); };
 process.on('SIGINT', () => { cleanup(); process.exit(130); });
 
 const base = { ...process.env, CHROMIUM_PATH: chromium, FORCE_COLOR: process.env.CI ? '0' : process.env.FORCE_COLOR };
@@ -38,10 +41,10 @@ try {
   r = join(reports, 'server.json');
   results.push(runSuite('server (jest, PostgreSQL)', 'node',
     ['--experimental-vm-modules', '../node_modules/jest/bin/jest.js', '--runInBand', '--json', `--outputFile=${r}`],
-    { cwd: join(repo, 'server'), env: { ...base, DATABASE_URL: pg.url }, report: r }));
+    { cwd: join(repo, 'server'), env: { ...base, DATABASE_URL: pg.url, ...mailEnv }, report: r }));
   r = join(reports, 'browser.json');
   results.push(runSuite('browser (Chromium, built app, real server)', 'node', vitest(null, 'client/e2e/vitest.e2e.config.ts', r),
-    { cwd: repo, env: { ...base, E2E_DATABASE_URL: pg.addDatabase('breakline_e2e'), E2E_S3_ENDPOINT: s3.endpoint, E2E_S3_BUCKET: s3.bucket }, report: r }));
+    { cwd: repo, env: { ...base, ...mailEnv, E2E_DATABASE_URL: pg.addDatabase('breakline_e2e'), E2E_S3_ENDPOINT: s3.endpoint, E2E_S3_BUCKET: s3.bucket }, report: r }));
 } finally {
   cleanup();
 }

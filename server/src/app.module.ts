@@ -9,6 +9,12 @@ import { UsersModule } from './users/users.module.js';
 import { SyncModule } from './sync/sync.module.js';
 import { AttachmentsModule } from './attachments/attachments.module.js';
 import { HealthController } from './health/health.controller.js';
+import { JobsModule } from './jobs/jobs.module.js';
+import { MailModule } from './mail/mail.module.js';
+import { MembersModule } from './members/members.module.js';
+import { ReviewModule } from './review/review.module.js';
+import { ReportsModule } from './reports/reports.module.js';
+import { AlertsModule } from './alerts/alerts.module.js';
 
 @Module({
   imports: [
@@ -22,6 +28,12 @@ import { HealthController } from './health/health.controller.js';
     AuthModule,
     SyncModule,
     AttachmentsModule,
+    JobsModule,
+    MailModule,
+    MembersModule,
+    ReviewModule,
+    ReportsModule,
+    AlertsModule,
   ],
   controllers: [HealthController],
 })

@@ -8,7 +8,7 @@ describe('the demo scenario', () => {
 
   const pullAll = async (token: string) =>
     (await t.http().get('/api/sync/pull?limit=1000').set('authorization', `Bearer ${token}`).expect(200)).body.changes as
-      { kind: string; fields: Record<string, any> }[];
+      { id: string; kind: string; fields: Record<string, any> }[];
 
   it('gives the first club two boats, three motors, both templates, passed and failed checks, and defects at every step', async () => {
     const s = await login(t, 'crew@gannetbay.example');
@@ -33,14 +33,38 @@ describe('the demo scenario', () => {
     }
   });
 
+  it('gives each motor a history of moves that ends on the boat it is fitted to now', async () => {
+    const s = await login(t, 'crew@gannetbay.example');
+    const records = await pullAll(s.accessToken);
+    const moves = records.filter((r) => r.kind === 'motorMove').map((r) => r.fields);
+    expect(moves.length).toBeGreaterThan(0);
+    for (const motor of records.filter((r) => r.kind === 'motor')) {
+      const own = moves.filter((m) => m.motorId === motor.id).sort((a, b) => a.movedAt.localeCompare(b.movedAt));
+      for (let i = 1; i < own.length; i++) expect(own[i]!.fromBoatId).toBe(own[i - 1]!.toBoatId);
+      if (own.length) expect(own.at(-1)!.toBoatId).toBe(motor.fields.boatId);
+      for (const m of own) expect(m.movedBy).toEqual(expect.any(String));
+    }
+  });
+
+  // Common practice, no source: the launch check reads the three chambers the demo boats have.
+  it('reads in the launch check the air chambers the demo boats have', async () => {
+    const s = await login(t, 'crew@gannetbay.example');
+    const records = await pullAll(s.accessToken);
+    const launch = records.find((r) => r.kind === 'checkTemplate' && r.fields.checkType === 'launch')!;
+    const read = launch.fields.sections.flatMap((sec: { items: { chamberId?: string }[] }) => sec.items.flatMap((i) => (i.chamberId ? [i.chamberId] : [])));
+    for (const boat of records.filter((r) => r.kind === 'boat')) {
+      expect(boat.fields.airChambers.map((c: { id: string }) => c.id)).toEqual(read);
+    }
+  });
+
   it('writes nothing the second time', async () => {
     const before = await t.db.query('SELECT last_seq FROM sync_club_state');
     expect(await seedDemo(t.db)).toEqual({ created: 0 });
     expect(await t.db.query('SELECT last_seq FROM sync_club_state')).toEqual(before);
   });
 
-  it('leaves the second club empty, as a new club starts', async () => {
+  it('leaves the second club with only its members\' cards, as a new club starts', async () => {
     const s = await login(t, 'admin@kelpreef.example');
-    expect(await pullAll(s.accessToken)).toEqual([]);
+    expect((await pullAll(s.accessToken)).map((r) => r.kind)).toEqual(['member', 'member']);
   });
 });

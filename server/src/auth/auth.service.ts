@@ -39,6 +39,11 @@ export class AuthService {
     return this.session(user, clubId ?? spent.clubId, spent.next);
   }
 
+  /** Signs in a person whose identity another step proved (an accepted invitation, a reset link). */
+  startSession(user: User, clubId?: string): Promise<SessionDto> {
+    return this.session(user, clubId);
+  }
+
   logout(token: string) {
     return this.refreshTokens.revoke(token);
   }

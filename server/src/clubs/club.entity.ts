@@ -4,6 +4,9 @@ export const PRESSURE_UNITS = ['kPa', 'psi', 'bar', 'mbar'] as const;
 export const WIND_UNITS = ['kn', 'km/h', 'm/s'] as const;
 export type PressureUnit = (typeof PRESSURE_UNITS)[number];
 export type WindUnit = (typeof WIND_UNITS)[number];
+/** What sign-on does for a member without a current award for the role: warn, or refuse. */
+export const AWARD_CHECKS = ['warn', 'block'] as const;
+export type AwardCheck = (typeof AWARD_CHECKS)[number];
 
 /** A surf lifesaving club: the tenant every club-owned row points to. */
 @Entity('clubs')
@@ -33,6 +36,9 @@ export class Club {
 
   @Column({ name: 'wind_unit', type: 'text', default: 'kn' })
   windUnit: WindUnit;
+
+  @Column({ name: 'award_check', type: 'text', default: 'warn' })
+  awardCheck: AwardCheck;
 
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;

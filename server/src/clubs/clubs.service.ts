@@ -24,13 +24,13 @@ export class ClubsService {
 
   async members(p: Principal): Promise<MemberDto[]> {
     const rows = await this.memberships.inClub(p.clubId);
-    return rows.map((m) => ({ userId: m.userId, displayName: m.user!.displayName, email: m.user!.email, role: m.role }));
+    return rows.map((m) => ({ membershipId: m.id, userId: m.userId, displayName: m.user!.displayName, email: m.user!.email, role: m.role }));
   }
 }
 
 export function toClubDto(c: Club): ClubDto {
   return {
     id: c.id, name: c.name, timeZone: c.timeZone, latitude: c.latitude, longitude: c.longitude,
-    pressureUnit: c.pressureUnit, windUnit: c.windUnit,
+    pressureUnit: c.pressureUnit, windUnit: c.windUnit, awardCheck: c.awardCheck,
   };
 }

@@ -4,7 +4,8 @@ import { HttpException } from '@nestjs/common';
 export type ErrorCode =
   | 'validation_failed' | 'invalid_credentials' | 'too_many_attempts' | 'token_expired'
   | 'unauthorized' | 'forbidden' | 'not_found' | 'conflict' | 'protocol_outdated'
-  | 'payload_too_large' | 'unsupported_media_type' | 'clock_ahead' | 'storage_unavailable' | 'internal_error';
+  | 'payload_too_large' | 'unsupported_media_type' | 'clock_ahead' | 'storage_unavailable' | 'internal_error'
+  | 'mail_unavailable' | 'link_invalid' | 'link_expired' | 'link_used';
 
 export interface FieldProblem { field: string; message: string }
 

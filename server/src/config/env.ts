@@ -65,6 +65,51 @@ export class Env {
   @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(100)
   PHOTO_MAX_MB = 8;
 
+  // Mail over SMTP. Without SMTP_HOST (unset or empty) nothing is mailed: invitations answer 503
+  // and alerts are logged as not sent; the rest of the server runs.
+  @IsOptional() @Transform(({ value }) => (value === '' ? undefined : value)) @IsString() @Matches(/^[A-Za-z0-9.-]+$|^\[[0-9a-fA-F:.]+\]$/, { message: 'SMTP_HOST must be a host name or address, e.g. smtp.example.org or 127.0.0.1' })
+  SMTP_HOST?: string;
+
+  @IsOptional() @Type(() => Number) @IsInt({ message: 'SMTP_PORT must be a port number, e.g. 587' }) @Min(1) @Max(65535)
+  SMTP_PORT = 587;
+
+  // true: TLS from the first byte (usually port 465); false: the server may upgrade with STARTTLS.
+  @IsOptional() @Transform(({ value }) => (typeof value === 'string' ? ({ true: true, false: false } as Record<string, boolean>)[value.toLowerCase()] ?? value : value))
+  @IsBoolean({ message: 'SMTP_SECURE must be true or false' })
+  SMTP_SECURE = false;
+
+  @ValidateIf((e: Env) => e.SMTP_PASSWORD !== undefined) @IsString({ message: 'SMTP_USER must be set when SMTP_PASSWORD is' }) @MinLength(1)
+  SMTP_USER?: string;
+
+  @ValidateIf((e: Env) => e.SMTP_USER !== undefined) @IsString({ message: 'SMTP_PASSWORD must be set when SMTP_USER is' }) @MinLength(1)
+  SMTP_PASSWORD?: string;
+
+  @IsOptional() @Matches(/^([^<>@]*<[^<>@\s]+@[^<>@\s]+\.[^<>@\s]+>|[^<>@\s]+@[^<>@\s]+\.[^<>@\s]+)$/, { message: 'SMTP_FROM must be an address such as breakline@club.example or "Breakline <breakline@club.example>"' })
+  SMTP_FROM = 'Breakline <breakline@localhost.localdomain>';
+
+  // First wait before a failed send is tried again; each later wait doubles (about 7 tries).
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(3600)
+  MAIL_RETRY_SECONDS = 30;
+
+  // Where the local mail catcher keeps caught messages; set by npm start and npm test, which
+  // turns on the caught-mail page for admins. Never set it in production.
+  @IsOptional() @Transform(({ value }) => (value === '' ? undefined : value)) @IsString()
+  MAIL_CAUGHT_DIR?: string;
+
+  // The address people open Breakline at, for links in e-mails; http://HOST:PORT when unset.
+  @IsOptional() @Transform(({ value }) => (value === '' ? undefined : value)) @IsUrl({ require_tld: false, require_protocol: true, protocols: ['http', 'https'] }, { message: 'APP_URL must be an http:// or https:// address, e.g. https://breakline.club.example' })
+  APP_URL?: string;
+
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(720)
+  INVITE_TTL_HOURS = 168;
+
+  @IsOptional() @Type(() => Number) @IsInt() @Min(5) @Max(1440)
+  PASSWORD_RESET_TTL_MINUTES = 60;
+
+  // Reset requests per address and e-mail in each LOGIN_WINDOW_MINUTES.
+  @IsOptional() @Type(() => Number) @IsInt() @Min(1) @Max(100)
+  PASSWORD_RESET_MAX_REQUESTS = 5;
+
   @IsOptional() @IsIn(['development', 'production', 'test'])
   NODE_ENV: 'development' | 'production' | 'test' = 'development';
 }

@@ -1,6 +1,7 @@
 import { EntitySchema } from 'typeorm';
 import type { RecordKind } from '@breakline/sync-protocol';
 import { ALL_KINDS, fieldColumns, tableOf } from './columns.js';
+import { REVIEW_INDICES } from './review-indices.js';
 
 /**
  * One typed table a record kind. The sync columns are shared; the kind's fields come from its
@@ -26,7 +27,7 @@ function kindEntity(kind: RecordKind) {
     tableName: tableOf(kind),
     columns: columns as never,
     // Pull reads a club's records in change order after a checkpoint: this index is that scan.
-    indices: [{ name: `ix_${tableOf(kind)}_changes`, columns: ['clubId', 'changeSeq'] }],
+    indices: [{ name: `ix_${tableOf(kind)}_changes`, columns: ['clubId', 'changeSeq'] }, ...(REVIEW_INDICES[kind] ?? [])],
   });
 }
 

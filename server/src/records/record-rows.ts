@@ -21,7 +21,7 @@ export function rowToRecord(kind: RecordKind, row: Row): StoredRecord {
   };
 }
 
-/** Record → the JSON object `jsonb_to_recordset` turns into a row. */
+/** Record → the JSON object `json_to_recordset` turns into a row. */
 export function recordToRow(kind: RecordKind, r: StoredRecord): Row {
   const row: Row = {
     id: r.id, club_id: r.clubId, version: r.version, hlc: r.hlc, updated_at: r.updatedAt,

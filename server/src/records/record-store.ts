@@ -10,6 +10,7 @@ const SYNC_COLUMNS: [string, string][] = [
 
 const columnsOf = (kind: RecordKind): [string, string][] => [...SYNC_COLUMNS, ...fieldColumns(kind).map((c): [string, string] => [c.column, c.type])];
 const q = (name: string) => `"${name}"`;
+const upsertSqlCache = new Map<RecordKind, string>();
 
 /** Kind-table reads and writes as single multi-row statements, never one entity at a time. */
 export const recordStore = {
@@ -24,19 +25,38 @@ export const recordStore = {
     return rows.map((r) => rowToRecord(kind, r));
   },
 
-  /** Inserts or replaces records in one statement through jsonb_to_recordset. */
+  /**
+   * Inserts or replaces records in one statement through json_to_recordset. The rows go as json,
+   * not jsonb: jsonb input builds and sorts a binary tree of every row only to be taken apart
+   * again, which measured about half as slow again as json for a 10,000-record push.
+   */
   async upsertMany(em: EntityManager, kind: RecordKind, records: StoredRecord[]): Promise<void> {
     if (!records.length) return;
-    const cols = columnsOf(kind);
-    const names = cols.map(([n]) => q(n)).join(', ');
-    const defs = cols.map(([n, t]) => `${q(n)} ${t}`).join(', ');
-    const updates = cols.filter(([n]) => n !== 'id' && n !== 'club_id').map(([n]) => `${q(n)} = EXCLUDED.${q(n)}`).join(', ');
-    const table = q(tableOf(kind));
-    await em.query(
-      `INSERT INTO ${table} (${names}) SELECT ${names} FROM jsonb_to_recordset($1::jsonb) AS x(${defs})
-       ON CONFLICT (id) DO UPDATE SET ${updates} WHERE ${table}.club_id = EXCLUDED.club_id`,
-      [JSON.stringify(records.map((r) => recordToRow(kind, r)))],
-    );
+    await em.query(recordStore.upsertSql(kind, 1), [recordStore.rowsJson(kind, records)]);
+  },
+
+  /**
+   * The upsert of upsertMany reading its rows from parameter `$param`, so a caller can run it as
+   * one part of a larger statement (the push writes records and change log in one).
+   */
+  upsertSql(kind: RecordKind, param: number): string {
+    let sql = upsertSqlCache.get(kind);
+    if (!sql) {
+      const cols = columnsOf(kind);
+      const names = cols.map(([n]) => q(n)).join(', ');
+      const defs = cols.map(([n, t]) => `${q(n)} ${t}`).join(', ');
+      const updates = cols.filter(([n]) => n !== 'id' && n !== 'club_id').map(([n]) => `${q(n)} = EXCLUDED.${q(n)}`).join(', ');
+      const table = q(tableOf(kind));
+      sql = `INSERT INTO ${table} (${names}) SELECT ${names} FROM json_to_recordset($PARAM::json) AS x(${defs})
+       ON CONFLICT (id) DO UPDATE SET ${updates} WHERE ${table}.club_id = EXCLUDED.club_id`;
+      upsertSqlCache.set(kind, sql);
+    }
+    return sql.replace('$PARAM', `$${param}`);
+  },
+
+  /** The JSON parameter of upsertSql. */
+  rowsJson(kind: RecordKind, records: StoredRecord[]): string {
+    return JSON.stringify(records.map((r) => recordToRow(kind, r)));
   },
 
   /**

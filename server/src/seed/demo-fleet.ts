@@ -27,3 +27,16 @@ export function motors(today: string): { id: string; fields: KindFields['motor']
     { id: demoId('motor:3'), fields: { ...base, serial: 'TM25-41930', model: 'demo 25 hp two-stroke (spare)', hourMeter: 88.2, lastServiceAt: `${today}T00:00:00Z`, lastServiceHours: 88.2, boatId: null } },
   ];
 }
+
+/** Where the motors have been: IRB 2's motor away for a starter cord, the spare standing in. */
+export function motorMoves(people: { captain: string; driver: string }, day: (offset: number) => string): { id: string; fields: KindFields['motorMove'] }[] {
+  const [m2, m3, b2] = [demoId('motor:2'), demoId('motor:3'), BOATS[1]!.id];
+  const move = (n: number, motorId: string, fromBoatId: string | null, toBoatId: string | null, offset: number, time: string, movedBy: string, reason: string) =>
+    ({ id: demoId(`move:${n}`), fields: { motorId, fromBoatId, toBoatId, movedAt: `${day(offset)}T${time}:00Z`, movedBy, reason } });
+  return [
+    move(1, m2, b2, null, -45, '06:10', people.captain, 'Off for a new starter cord'),
+    move(2, m3, null, b2, -45, '06:25', people.captain, 'Stand-in while TM25-38842 is off'),
+    move(3, m3, b2, null, -25, '05:40', people.driver, 'TM25-38842 is back; spare to the store'),
+    move(4, m2, null, b2, -25, '05:55', people.driver, 'Back from the starter cord repair'),
+  ];
+}

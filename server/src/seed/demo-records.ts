@@ -5,13 +5,16 @@ import {
   DEFAULT_LAUNCH_TEMPLATE, DEFAULT_STOW_TEMPLATE, encodeHlc, PROTOCOL_VERSION, type KindFields, type Mutation, type RecordKind, type Role,
 } from '@breakline/sync-protocol';
 import { PushService } from '../sync/push.service.js';
-import { BOATS, motors } from './demo-fleet.js';
+import { BOATS, motorMoves, motors } from './demo-fleet.js';
 import { demoId } from './demo-ids.js';
 import { demoChecks, demoDefects } from './demo-history.js';
+import { demoPatrol } from './demo-patrol.js';
+import { DEMO_CLUBS } from './demo-scenario.js';
 
 export interface DemoPeople { admin: string; captain: string; driver: string; crew: string }
 
 const DEVICE = 'demo-seed';
+const GANNET_BAY = DEMO_CLUBS.find((c) => c.slug === 'gannet-bay')!;
 
 export async function seedDemoRecords(db: DataSource, clubId: string, people: DemoPeople, now = new Date()) {
   const day = (offset: number) => new Date(now.getTime() + offset * 86_400_000).toISOString().slice(0, 10);
@@ -22,6 +25,9 @@ export async function seedDemoRecords(db: DataSource, clubId: string, people: De
     ...motors(day(-20)).map((m): [RecordKind, string, KindFields['motor']] => ['motor', m.id, m.fields]),
     ...demoChecks(people, day).map((c): [RecordKind, string, KindFields['check']] => ['check', c.id, c.fields]),
     ...demoDefects(people, day).map((d): [RecordKind, string, KindFields['defect']] => ['defect', d.id, d.fields]),
+    // Appended, never inserted: a mutation's seq is its place here, and a seeded database skips seqs it has seen.
+    ...motorMoves(people, day).map((m): [RecordKind, string, KindFields['motorMove']] => ['motorMove', m.id, m.fields]),
+    ...demoPatrol(people, now, GANNET_BAY, Object.fromEntries(motors(day(-20)).map((m) => [m.id, m.fields.hourMeter]))),
   ];
   let c = 0;
   const mutations: Mutation[] = records.map(([kind, recordId, patch], i) => ({

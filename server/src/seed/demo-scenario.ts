@@ -6,6 +6,8 @@ export const DEMO_PASSWORD = 'surf-demo-2026';
 export interface DemoClub {
   slug: string; name: string; timeZone: string; latitude: number; longitude: number;
   pressureUnit: 'kPa' | 'psi' | 'bar' | 'mbar'; windUnit: 'kn' | 'km/h' | 'm/s';
+  /** Sign-on without a current award: warn (the default) or refuse. */
+  awardCheck?: 'warn' | 'block';
   members: { email: string; displayName: string; role: Role }[];
 }
 
@@ -22,7 +24,7 @@ export const DEMO_CLUBS: DemoClub[] = [
   },
   {
     slug: 'kelp-reef', name: 'Kelp Reef Surf Lifesaving Club', timeZone: 'Pacific/Auckland',
-    latitude: -36.9021, longitude: 174.4263, pressureUnit: 'psi', windUnit: 'km/h',
+    latitude: -36.9021, longitude: 174.4263, pressureUnit: 'psi', windUnit: 'km/h', awardCheck: 'block',
     members: [
       { email: 'admin@kelpreef.example', displayName: 'Aroha Pennington', role: 'admin' },
       { email: 'crew@kelpreef.example', displayName: 'Declan Moss', role: 'crew' },

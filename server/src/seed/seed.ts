@@ -5,6 +5,7 @@ import { Membership } from '../clubs/membership.entity.js';
 import { User } from '../users/user.entity.js';
 import { DEMO_CLUBS, DEMO_PASSWORD } from './demo-scenario.js';
 import { seedDemoRecords } from './demo-records.js';
+import { seedMemberCards } from './demo-members.js';
 
 /** Writes the demo scenario; running it again changes nothing that is already there. */
 export async function seedDemo(db: DataSource): Promise<{ created: number }> {
@@ -23,6 +24,7 @@ export async function seedDemo(db: DataSource): Promise<{ created: number }> {
       }
     }
   });
+  created += await seedMemberCards(db);
   created += await seedGannetBayRecords(db);
   return { created };
 }

@@ -6,8 +6,8 @@ import {
 import { AppError } from '../common/app-error.js';
 import type { Principal } from '../auth/principal.js';
 import { recordStore } from '../records/record-store.js';
-import { appendChanges } from './change-log.js';
-import { lockClub, saveClubSeq } from './club-lock.js';
+import { writeChanges } from './change-log.js';
+import { lockClub } from './club-lock.js';
 import { assertProtocol, toAppError } from './sync-errors.js';
 import { conflictFromRow, type ConflictRow } from './conflict-rows.js';
 
@@ -55,13 +55,11 @@ export class ConflictsService {
   private async persist(em: EntityManager, p: Principal, club: ClubState, startSeq: number, settled: ConflictRecord) {
     const rec = club.records[settled.recordId];
     if (rec && rec.changeSeq > startSeq) {
-      await recordStore.upsertMany(em, rec.kind, [rec]);
       const field = settled.field.split('.')[0]!;
-      await appendChanges(em, p.clubId, [{
+      await writeChanges(em, p.clubId, new Map([[rec.kind, [rec]]]), [{
         seq: rec.changeSeq, kind: rec.kind, recordId: rec.id, version: rec.version, mutationId: null, deviceId: 'server',
         userId: p.userId, hlc: rec.hlc, patch: field === 'deleted' ? {} : { [field]: rec.fields[field] }, deleted: rec.deleted, status: 'settled',
-      }]);
-      await saveClubSeq(em, p.clubId, club.changeSeq);
+      }], club.changeSeq);
     }
     await em.query(
       `UPDATE sync_conflicts SET status = 'settled', settled_by = $2, settled_at = $3, settled_value = $4::jsonb, note = $5 WHERE id = $1`,

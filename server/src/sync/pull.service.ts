@@ -1,11 +1,17 @@
 import { Injectable } from '@nestjs/common';
 import { DataSource } from 'typeorm';
-import { canSee, PullQuerySchema, toWire, type PullResponse } from '@breakline/sync-protocol';
+import {
+  canSee, formatCheckpoint, needsFreshStart, parseCheckpoint, PullQuerySchema, toWire, type PullResponse, type StoredRecord,
+} from '@breakline/sync-protocol';
 import { AppError } from '../common/app-error.js';
 import type { Principal } from '../auth/principal.js';
 import { recordStore } from '../records/record-store.js';
 
-/** Pull: the club's records changed after a checkpoint, oldest change first, that the caller may see. */
+/**
+ * Pull: the club's records changed after a checkpoint, oldest change first, that the caller may
+ * see. Checkpoints carry the purge horizon they were given under, so a fresh start below the
+ * horizon goes on page after page while a replica from before the purge is sent back to the start.
+ */
 @Injectable()
 export class PullService {
   constructor(private readonly db: DataSource) {}
@@ -16,18 +22,26 @@ export class PullService {
       const details = q.error.issues.map((i) => ({ field: i.path.join('.') || 'query', message: i.message }));
       throw new AppError(400, 'validation_failed', 'The pull request is not valid.', details);
     }
-    const since = Number(q.data.since ?? 0);
+    const since = parseCheckpoint(q.data.since);
     const limit = q.data.limit;
-    const [state] = await this.db.query('SELECT last_seq, purged_through_seq FROM sync_club_state WHERE club_id = $1', [p.clubId]);
-    const purged = Number(state?.purged_through_seq ?? 0);
-    if (since > 0 && since < purged) {
-      return { changes: [], checkpoint: String(state.last_seq), hasMore: false, resetRequired: true };
-    }
-    const rows = await recordStore.changedAfter(this.db.manager, p.clubId, since, limit);
+    // One snapshot for the horizon and the records: were a purge to commit between two separate
+    // reads, a replica from before it would pass the check and then never see the purged deletes.
+    return this.db.transaction('REPEATABLE READ', async (em) => {
+      const [state] = await em.query('SELECT last_seq, purged_through_seq FROM sync_club_state WHERE club_id = $1', [p.clubId]);
+      const horizon = Number(state?.purged_through_seq ?? 0);
+      if (needsFreshStart(since, horizon)) {
+        return { changes: [], checkpoint: formatCheckpoint({ horizon, seq: Number(state?.last_seq ?? 0) }), hasMore: false, resetRequired: true };
+      }
+      const rows = await recordStore.changedAfter(em, p.clubId, since.seq, limit);
+      return this.page(p, rows, limit, horizon, since.seq);
+    });
+  }
+
+  private page(p: Principal, rows: StoredRecord[], limit: number, horizon: number, sinceSeq: number): PullResponse {
     const page = rows.slice(0, limit);
     // Records the caller may not see still move the checkpoint on, so they are never asked for again.
     const changes = page.filter((r) => canSee(r.kind, p.role, r.fields, p.userId)).map(toWire);
-    const checkpoint = page.length ? String(page[page.length - 1]!.changeSeq) : String(since);
-    return { changes, checkpoint, hasMore: rows.length > limit };
+    const seq = page.length ? page[page.length - 1]!.changeSeq : sinceSeq;
+    return { changes, checkpoint: formatCheckpoint({ horizon, seq }), hasMore: rows.length > limit };
   }
 }

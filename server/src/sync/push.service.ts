@@ -1,13 +1,13 @@
 import { Injectable } from '@nestjs/common';
 import { DataSource, type EntityManager } from 'typeorm';
 import {
-  applyMutation, deepEqual, HybridClock, PushRequestSchema,
-  type ClubState, type Mutation, type MutationResult, type PushResponse, type RecordKind, type StoredRecord,
+  applyMutation, deepEqual, HybridClock, parsePushRequest,
+  type ClubState, type Fields, type Mutation, type MutationResult, type PushResponse, type RecordKind, type StoredRecord,
 } from '@breakline/sync-protocol';
 import { AppError } from '../common/app-error.js';
 import type { Principal } from '../auth/principal.js';
 import { recordStore } from '../records/record-store.js';
-import { appendChanges, insertConflicts, type ChangeEntry } from './change-log.js';
+import { insertConflicts, writeChanges, type ChangeEntry } from './change-log.js';
 import { lockClub, lockDevice, saveClubSeq, saveDeviceSeq } from './club-lock.js';
 import { assertProtocol } from './sync-errors.js';
 
@@ -16,7 +16,8 @@ const NOT_FOUND = 'This record is not on the server, so the change could not be 
 /**
  * Push: one transaction a batch. The club's records that the batch touches are loaded in one
  * query a kind, every mutation is checked and merged by the same rules the phones' tests use
- * (sync-protocol), and the results are written back in one statement a table.
+ * (sync-protocol), and the records, their change log and the club's counter are written back in
+ * one statement.
  */
 @Injectable()
 export class PushService {
@@ -26,12 +27,12 @@ export class PushService {
 
   async push(p: Principal, body: unknown): Promise<PushResponse> {
     assertProtocol(body);
-    const parsed = PushRequestSchema.safeParse(body);
+    const parsed = parsePushRequest(body);
     if (!parsed.success) {
       const details = parsed.error.issues.map((i) => ({ field: i.path.join('.') || 'body', message: i.message }));
       throw new AppError(400, 'validation_failed', 'The push is not in the sync format.', details);
     }
-    const { deviceId, mutations } = parsed.data as { deviceId: string; mutations: Mutation[] };
+    const { deviceId, mutations } = parsed.data;
     return this.db.transaction((em) => this.pushInTransaction(em, p, deviceId, mutations));
   }
 
@@ -42,7 +43,7 @@ export class PushService {
     const { records, foreign } = await this.loadTouched(em, p.clubId, mutations);
     const club: ClubState = { records, changeSeq: locked.lastSeq, deviceSeq: { [deviceId]: deviceSeq }, conflicts: [], purgedThrough: locked.purgedThroughSeq };
     const auth = { userId: p.userId, role: p.role, clubId: p.clubId };
-    const ctx = { club, auth, deviceId, pt: Date.now(), clock: this.clock, newId: () => crypto.randomUUID() };
+    const ctx = { club, auth, deviceId, pt: Date.now(), clock: this.clock, newId: () => crypto.randomUUID(), validated: new Map<Fields, Fields>() };
     const results: MutationResult[] = [];
     const changes: ChangeEntry[] = [];
     for (const m of mutations) {
@@ -90,10 +91,9 @@ export class PushService {
     for (const r of Object.values(club.records)) {
       if (r.changeSeq > startSeq) (changed.get(r.kind) ?? changed.set(r.kind, []).get(r.kind)!).push(r);
     }
-    for (const [kind, recs] of changed) await recordStore.upsertMany(em, kind, recs);
-    await appendChanges(em, clubId, changes);
+    if (changes.length) await writeChanges(em, clubId, changed, changes, club.changeSeq);
+    else await saveClubSeq(em, clubId, club.changeSeq);
     await insertConflicts(em, club.conflicts);
-    await saveClubSeq(em, clubId, club.changeSeq);
   }
 }
 

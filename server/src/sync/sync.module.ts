@@ -8,6 +8,6 @@ import { TombstonesService } from './tombstones.service.js';
 @Module({
   controllers: [SyncController],
   providers: [PushService, PullService, ConflictsService, TombstonesService],
-  exports: [TombstonesService],
+  exports: [TombstonesService, PushService],
 })
 export class SyncModule {}

@@ -3,7 +3,7 @@ import type { Role } from '@breakline/sync-protocol';
 export interface UserDto { id: string; email: string; displayName: string }
 export interface ActiveClubDto {
   id: string; name: string; timeZone: string; latitude: number; longitude: number;
-  pressureUnit: string; windUnit: string; role: Role;
+  pressureUnit: string; windUnit: string; awardCheck: string; role: Role;
 }
 export interface MembershipDto { clubId: string; clubName: string; role: Role }
 
