@@ -43,6 +43,9 @@ const pwa = VitePWA({
     // The API must always reach the server (or fail plainly), never get the app shell back.
     navigateFallbackDenylist: [/^\/api\//],
     cleanupOutdatedCaches: true,
+    // The background sync handler (client/public): the generated worker keeps precache and the
+    // update prompt, and this adds the `sync` event that tells open pages to send the outbox.
+    importScripts: ['/sw-background-sync.js'],
   },
 });
 

@@ -12,6 +12,7 @@ import { tripSpec } from './kinds/trip.js';
 import { incidentNoteSpec } from './kinds/incident-note.js';
 import { serviceRecordSpec } from './kinds/service-record.js';
 import { daySignOffSpec } from './kinds/day-sign-off.js';
+import { memberSpec } from './kinds/member.js';
 
 export { RECORD_KINDS, isRecordKind, type RecordKind };
 
@@ -28,6 +29,7 @@ export const KIND_SPECS = {
   incidentNote: incidentNoteSpec,
   serviceRecord: serviceRecordSpec,
   daySignOff: daySignOffSpec,
+  member: memberSpec,
 } as const satisfies Record<RecordKind, KindSpec<any>>;
 
 /** Each kind's fields, e.g. `KindFields['defect']`. */

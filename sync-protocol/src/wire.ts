@@ -74,7 +74,7 @@ export interface SyncRecord<F extends Fields = Fields> {
 
 export interface PullResponse {
   changes: SyncRecord[];
-  /** Opaque: send it back as `since` on the next pull. */
+  /** Opaque to the phone ("<horizon>.<seq>", see wire-checkpoint.ts): send it back as `since` on the next pull. */
   checkpoint: string;
   hasMore: boolean;
   /** The checkpoint is older than the tombstone purge horizon: drop the replica and pull from the start. */

@@ -102,6 +102,78 @@ describe('memory sync server', () => {
     expect(s.pull(ana, {}).changes).toHaveLength(1);
   });
 
+  it('lets a replica that starts afresh after a purge pull every page, and still resets one that pulled before it', () => {
+    const s = new MemorySyncServer();
+    const ids = [1, 2, 3, 4].map((i) => `0190f1a0-0000-7000-8000-0000000000f${i}`);
+    push(s, sue, 'phone-s', ids.map((id, i) => mut('defect', id, i + 1, FIXTURES.defect)));
+    // Ana is part-way through her pull when the first record is deleted and its tombstone purged.
+    const early = s.pull(ana, { limit: 1 });
+    expect(early).toMatchObject({ checkpoint: '1', hasMore: true });
+    push(s, sue, 'phone-s', [mut('defect', ids[0]!, 5, {}, { deleted: true, baseVersion: 1, base: FIXTURES.defect })]);
+    expect(s.purgeTombstones(CLUB, 5)).toBe(1);
+    expect(s.pull(ana, { since: early.checkpoint, limit: 1 })).toMatchObject({ resetRequired: true, changes: [] });
+
+    // Her fresh start goes page by page below the horizon without being sent back to the start.
+    const seen: string[] = [];
+    let since: string | undefined;
+    for (let page = 0; page < 10; page++) {
+      const res = s.pull(ana, { since, limit: 1 });
+      expect(res.resetRequired).toBeUndefined();
+      seen.push(...res.changes.map((c) => c.id));
+      since = res.checkpoint;
+      if (!res.hasMore) break;
+    }
+    expect(seen).toEqual(ids.slice(1));
+    expect(s.pull(ana, { since }).changes).toEqual([]);
+  });
+
+  it('reads a plain-number checkpoint as one given out before any purge', () => {
+    const s = new MemorySyncServer();
+    push(s, sue, 'phone-s', [mut('defect', D1, 1, FIXTURES.defect), mut('defect', D1, 2, {}, { deleted: true, baseVersion: 1, base: FIXTURES.defect })]);
+    push(s, sue, 'phone-s', [mut('defect', '0190f1a0-0000-7000-8000-0000000000d2', 3, FIXTURES.defect)]);
+    expect(s.pull(ana, { since: '1' }).checkpoint).toBe('3');
+    s.purgeTombstones(CLUB, 2);
+    expect(s.pull(ana, { since: '1' }).resetRequired).toBe(true);
+    const onward = s.pull(ana, { since: '2' });
+    expect(onward).toMatchObject({ checkpoint: '2.3', hasMore: false });
+    expect(onward.changes.map((c) => c.id)).toEqual(['0190f1a0-0000-7000-8000-0000000000d2']);
+    expect(s.pull(ana, { since: '3' })).toMatchObject({ changes: [], checkpoint: '2.3' });
+  });
+
+  it('resets a replica again when a second purge passes its fresh start', () => {
+    const s = new MemorySyncServer();
+    const [a, b, c] = ['0190f1a0-0000-7000-8000-0000000000a1', '0190f1a0-0000-7000-8000-0000000000a2', '0190f1a0-0000-7000-8000-0000000000a3'];
+    push(s, sue, 'phone-s', [mut('defect', a, 1, FIXTURES.defect), mut('defect', a, 2, {}, { deleted: true, baseVersion: 1, base: FIXTURES.defect })]);
+    s.purgeTombstones(CLUB, 2);
+    push(s, sue, 'phone-s', [mut('defect', b, 3, FIXTURES.defect), mut('defect', c, 4, FIXTURES.defect)]);
+    const fresh = s.pull(ana, { limit: 1 });
+    expect(fresh).toMatchObject({ checkpoint: '2.3', hasMore: true });
+    push(s, sue, 'phone-s', [mut('defect', c, 5, {}, { deleted: true, baseVersion: 1, base: FIXTURES.defect })]);
+    s.purgeTombstones(CLUB, 5);
+    expect(s.pull(ana, { since: fresh.checkpoint })).toMatchObject({ resetRequired: true });
+  });
+
+  it('checks a record changed again in the same batch as strictly as in a batch of its own', () => {
+    const later = (seq: number, patch: Record<string, unknown>, baseVersion: number, base: Record<string, unknown>) =>
+      mut('defect', D1, seq, patch, { baseVersion, base, l: T0 + seq });
+    const edits = [
+      later(2, { actionTaken: 'New tube fitted' }, 1, { actionTaken: null }),
+      later(3, { status: 'rejected' }, 2, { status: 'open' }), // a rejection needs its reason
+      later(4, { photos: ['cd'.repeat(32)] }, 1, { photos: FIXTURES.defect.photos }), // made before the first edit arrived
+      later(5, { description: '' }, 3, { description: FIXTURES.defect.description }),
+    ];
+    const create = mut('defect', D1, 1, FIXTURES.defect);
+    const together = new MemorySyncServer();
+    const one = push(together, sue, 'phone-s', [create, ...edits]).results;
+    const apart = new MemorySyncServer();
+    const each = [push(apart, sue, 'phone-s', [create]), ...edits.map((e) => push(apart, sue, 'phone-s', [e]))]
+      .flatMap((r) => r.results);
+    expect(one.map((r) => r.status)).toEqual(['applied', 'applied', 'rejected', 'merged', 'rejected']);
+    expect(one).toEqual(each);
+    expect(one[2]!.error!.message).toMatch(/Say why the report is not a defect/);
+    expect(together.record(CLUB, D1)).toEqual(apart.record(CLUB, D1));
+  });
+
   it('lets a supervisor settle a conflict by writing the overruled value', () => {
     const s = new MemorySyncServer();
     push(s, ana, 'phone-a', [mut('defect', D1, 1, FIXTURES.defect)]);

@@ -6,7 +6,7 @@ const rolesFrom = (min: Role) => ROLES.slice(ROLES.indexOf(min));
 
 describe('who may create', () => {
   const table: [RecordKind, Role][] = [
-    ['boat', 'supervisor'], ['motor', 'supervisor'], ['checkTemplate', 'supervisor'], ['serviceRecord', 'supervisor'],
+    ['boat', 'supervisor'], ['motor', 'supervisor'], ['checkTemplate', 'admin'], ['serviceRecord', 'supervisor'],
     ['trip', 'driver'], ['daySignOff', 'driver'], ['motorMove', 'driver'],
     ['check', 'crew'], ['defect', 'crew'], ['signOn', 'crew'], ['incidentNote', 'crew'],
   ];
@@ -54,6 +54,11 @@ describe('who may update', () => {
     ['driver edits a boat', 'boat', 'driver', { notes: 'x' }, FIXTURES.boat, false],
     ['supervisor edits a boat', 'boat', 'supervisor', { notes: 'x' }, FIXTURES.boat, true],
     ['driver edits a template', 'checkTemplate', 'driver', { name: 'x' }, FIXTURES.checkTemplate, false],
+    ['admin changes the items of a saved template version', 'checkTemplate', 'admin', { sections: [] }, FIXTURES.checkTemplate, false],
+    ['admin renumbers a saved template version', 'checkTemplate', 'admin', { templateVersion: 2 }, FIXTURES.checkTemplate, false],
+    ['admin retires a template version', 'checkTemplate', 'admin', { retired: true }, FIXTURES.checkTemplate, true],
+    ['supervisor retires a template version', 'checkTemplate', 'supervisor', { retired: true }, FIXTURES.checkTemplate, false],
+    ['supervisor changes who moved a motor', 'motorMove', 'supervisor', { movedBy: 'member-cy' }, FIXTURES.motorMove, false],
     ['driver reads the hour meter', 'motor', 'driver', { hourMeter: 214 }, FIXTURES.motor, true],
     ['driver changes a motor model', 'motor', 'driver', { model: 'x' }, FIXTURES.motor, false],
     ['crew edits a trip', 'trip', 'crew', { purpose: 'training' }, FIXTURES.trip, false],
@@ -72,6 +77,10 @@ describe('who may update', () => {
     expect(checkUpdate('check', 'admin', { boatId: '0190f1a0-0000-7000-8000-000000000002' }, FIXTURES.check)).toEqual({
       ok: false,
       reason: 'The boat of a check cannot be changed once it is saved; make a new one instead.',
+    });
+    expect(checkUpdate('checkTemplate', 'admin', { sections: [] }, FIXTURES.checkTemplate)).toEqual({
+      ok: false,
+      reason: 'The sections of a check template cannot be changed once it is saved; make a new one instead.',
     });
     expect(checkUpdate('motor', 'driver', { model: 'x' }, FIXTURES.motor)).toEqual({
       ok: false,

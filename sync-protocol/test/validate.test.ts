@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { RECORD_KINDS, fieldNames, validatePatch, validateRecord, mergeRuleOf, isImmutableField } from '../src/index.js';
+import fc from 'fast-check';
+import {
+  RECORD_KINDS, fieldNames, validatePatch, validateRecord, mergeRuleOf, isImmutableField, patchIsValid, validateChangedRecord,
+} from '../src/index.js';
 import { FIXTURES } from './support/fixtures.js';
 
 const errorsOf = (r: { ok: boolean; errors?: { field: string; message: string }[] }) => (r.ok ? [] : r.errors!);
@@ -70,5 +73,38 @@ describe('record validation', () => {
     expect(mergeRuleOf('trip', 'purpose')).toBe('lww');
     expect(isImmutableField('check', 'boatId')).toBe(true);
     expect(isImmutableField('check', 'status')).toBe(false);
+  });
+});
+
+describe('validation of only what changed', () => {
+  // Values from every kind's fixture, plus wrong ones, so changes are sometimes valid and sometimes not.
+  const POOL: unknown[] = [
+    ...new Set(RECORD_KINDS.flatMap((k) => Object.values(FIXTURES[k] as Record<string, unknown>)).map((v) => JSON.stringify(v))),
+  ].map((v) => JSON.parse(v));
+  POOL.push(null, '', 'x', -1, 3.5, [], {}, true, 'rejected', 'verified', 'open', 'a'.repeat(5000));
+  const kindArb = fc.constantFrom(...RECORD_KINDS);
+  const changesArb = (kind: (typeof RECORD_KINDS)[number]) =>
+    fc.dictionary(fc.constantFrom(...fieldNames(kind), 'colour'), fc.constantFrom(...POOL), { maxKeys: 4 });
+
+  it('gives what validatePatch gives, field by field', () => {
+    fc.assert(fc.property(kindArb.chain((kind) => fc.tuple(fc.constant(kind), changesArb(kind))), ([kind, patch]) => {
+      expect(patchIsValid(kind, patch)).toBe(validatePatch(kind, patch).ok);
+    }), { numRuns: 1000 });
+    expect(patchIsValid('defect', null)).toBe(false);
+    expect(patchIsValid('defect', { description: 'Kill cord frayed' })).toBe(true);
+  });
+
+  it('gives what validateRecord gives for a valid record with some fields changed', () => {
+    let refused = 0;
+    fc.assert(fc.property(kindArb.chain((kind) => fc.tuple(fc.constant(kind), changesArb(kind))), ([kind, changes]) => {
+      const before = validateRecord(kind, FIXTURES[kind]);
+      if (!before.ok) throw new Error(`the ${kind} fixture must be valid`);
+      const fields = { ...(FIXTURES[kind] as Record<string, unknown>), ...changes };
+      const whole = validateRecord(kind, fields);
+      if (!whole.ok) refused += 1;
+      expect(validateChangedRecord(kind, before.value as never, fields, Object.keys(changes))).toEqual(whole);
+    }), { numRuns: 1000 });
+    expect(refused).toBeGreaterThan(100);
+    expect(refused).toBeLessThan(900);
   });
 });

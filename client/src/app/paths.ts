@@ -10,6 +10,10 @@ export const paths = {
     /** `next`: where to go after signing in (an in-app path). */
     href: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
   },
+  /** Pages opened from e-mailed links; the token follows `#token=`. */
+  acceptInvite: { path: '/accept-invite', href: () => '/accept-invite' },
+  resetPassword: { path: '/reset-password', href: () => '/reset-password' },
+  forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
   reviewDesk: { path: '/review', href: () => '/review' },
   boatFile: { path: '/boats/:boatId', href: (boatId: string) => `/boats/${encodeURIComponent(boatId)}` },
   fleet: { path: '/fleet', href: () => '/fleet' },
@@ -28,6 +32,21 @@ export const paths = {
   defectNew: { path: '/defects/new', href: (boatId?: string) => withQuery('/defects/new', { boat: boatId }) },
   defectFile: { path: '/defects/:defectId', href: (defectId: string) => `/defects/${encodeURIComponent(defectId)}` },
   admin: { path: '/admin', href: () => '/admin' },
+  tripFile: { path: '/trips/:tripId', href: (tripId: string) => `/trips/${encodeURIComponent(tripId)}` },
+  incidentNew: { path: '/trips/:tripId/incidents/new', href: (tripId: string) => `/trips/${encodeURIComponent(tripId)}/incidents/new` },
+  incidentFile: { path: '/incidents/:incidentId', href: (incidentId: string) => `/incidents/${encodeURIComponent(incidentId)}` },
+  templates: { path: '/admin/templates', href: () => '/admin/templates' },
+  templateEdit: { path: '/admin/templates/:checkType', href: (checkType: 'launch' | 'stow') => `/admin/templates/${checkType}` },
+  /** The Review desk's other screens; its tables are `reviewDesk` with `?tab=` and their filters. */
+  deskRecord: {
+    path: '/review/records/:kind/:recordId',
+    href: (kind: string, recordId: string) => `/review/records/${encodeURIComponent(kind)}/${encodeURIComponent(recordId)}`,
+  },
+  deskDay: { path: '/review/day', href: (date?: string) => withQuery('/review/day', { date }) },
+  deskConflicts: { path: '/review/conflicts', href: () => '/review/conflicts' },
+  seasonReport: { path: '/season-report', href: () => '/season-report' },
+  crewAwards: { path: '/crew-awards', href: () => '/crew-awards' },
+  caughtMail: { path: '/admin/mail', href: () => '/admin/mail' },
 } as const;
 
 function withQuery(path: string, query: Record<string, string | number | undefined>): string {

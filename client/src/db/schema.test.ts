@@ -10,7 +10,7 @@ function v1Row(id: string, fields: Record<string, unknown>): Omit<RecordRow, 'bo
 }
 
 describe('schema upgrades', () => {
-  it('opens a version 1 database with data and upgrades it to version 2, keeping the data', async () => {
+  it('opens a version 1 database with data and upgrades it to the latest version, keeping the data', async () => {
     const name = 'upgrade-v1-v2';
     const old = new ReplicaDb(name, 1);
     await old.open();
@@ -23,7 +23,7 @@ describe('schema upgrades', () => {
     const db = new ReplicaDb(name);
     await db.open();
     expect(db.verno).toBe(LATEST_VERSION);
-    expect(LATEST_VERSION).toBe(2);
+    expect(LATEST_VERSION).toBe(3);
     expect(await db.records.count()).toBe(2);
     expect(await db.outbox.count()).toBe(1);
     expect(await db.syncState.get('club:club-saltmarsh')).toMatchObject({ checkpoint: '42' });
@@ -34,6 +34,28 @@ describe('schema upgrades', () => {
     // Tables new in version 2 exist and are empty.
     expect(await db.photos.count()).toBe(0);
     expect(await db.rejected.count()).toBe(0);
+    db.close();
+  });
+
+  it('upgrades version 2 photos to version 3: uploaded ones sent, the others due for the queue', async () => {
+    const name = 'upgrade-v2-v3';
+    const old = new ReplicaDb(name, 2);
+    await old.open();
+    const bytes = new Uint8Array([0xff, 0xd8, 0xff, 0xe0]).buffer;
+    await old.table('photos').bulkPut([
+      { sha256: 'a'.repeat(64), type: 'image/jpeg', bytes, uploaded: 0, clubId: 'club-saltmarsh' },
+      { sha256: 'b'.repeat(64), type: 'image/jpeg', bytes, uploaded: 1, clubId: 'club-saltmarsh' },
+    ]);
+    old.close();
+
+    const db = new ReplicaDb(name);
+    await db.open();
+    expect(db.verno).toBe(3);
+    expect(await db.photos.where('[clubId+state]').equals(['club-saltmarsh', 'due']).primaryKeys()).toEqual(['a'.repeat(64)]);
+    const sent = await db.photos.get('b'.repeat(64));
+    expect(sent).toMatchObject({ state: 'sent', type: 'image/jpeg' });
+    expect(sent).not.toHaveProperty('uploaded');
+    expect(new Uint8Array(sent!.bytes)).toEqual(new Uint8Array([0xff, 0xd8, 0xff, 0xe0]));
     db.close();
   });
 });

@@ -36,6 +36,26 @@ export const SCHEMA_VERSIONS = [
           if (typeof boatId === 'string') row.boatId = boatId;
         }),
   },
+  {
+    version: 3,
+    stores: {
+      // The upload queue reads a club's photos by where they stand: kept, due, sent or refused.
+      photos: 'sha256, [clubId+state]',
+    },
+    // Version 2 knew only uploaded 0/1 and never uploaded; the queue still holds back any photo
+    // whose record waits in the outbox, so marking the unsent ones due keeps the order. One row
+    // at a time and put back whole: a day of photos is tens of megabytes, and modify() would
+    // deep-copy each photo's bytes in script.
+    upgrade: async (tx: Transaction) => {
+      const photos = tx.table<PhotoRow & { uploaded?: 0 | 1 }, string>('photos');
+      for (const sha256 of await photos.toCollection().primaryKeys()) {
+        const row = await photos.get(sha256);
+        if (!row) continue;
+        const { uploaded, ...rest } = row;
+        await photos.put({ ...rest, state: uploaded === 1 ? 'sent' : 'due' });
+      }
+    },
+  },
 ] as const;
 
 export const LATEST_VERSION = SCHEMA_VERSIONS[SCHEMA_VERSIONS.length - 1]!.version;
@@ -50,7 +70,9 @@ export class ReplicaDb extends Dexie {
 
   /** `upTo` exists for the upgrade test, which must write a database as an older app did. */
   constructor(name: string, upTo: number = LATEST_VERSION) {
-    super(name);
+    // No query cache: with it, every live query's answer is deep-copied on each change, and a
+    // screen listing a club's 12,000 checks spent most of a first sync copying them.
+    super(name, { cache: 'disabled' });
     for (const step of SCHEMA_VERSIONS) {
       if (step.version > upTo) break;
       const v = this.version(step.version).stores(step.stores);

@@ -59,7 +59,7 @@ export interface ReplicaRow {
   seq: number;
 }
 
-export type FailureReason = 'offline' | 'signed-out' | 'outdated' | 'server' | 'storage' | 'app';
+export type FailureReason = 'offline' | 'signed-out' | 'outdated' | 'server' | 'storage' | 'photos' | 'app';
 
 export interface SyncFailure {
   reason: FailureReason;
@@ -108,12 +108,22 @@ export interface ConflictSeenRow {
   at: string;
 }
 
+/**
+ * Where a photo stands with the server: `kept` on this phone, no record sent refers to it yet;
+ * `due` a record that refers to it was accepted, so it is to be uploaded; `sent` the server has it
+ * (uploaded from here or fetched from there); `refused` the server will not take it (too large,
+ * not a photo): kept here with the reason until the person tries again.
+ */
+export type PhotoState = 'kept' | 'due' | 'sent' | 'refused';
+
 /** A photo by content; bytes rather than a Blob because some browsers lose Blobs in IndexedDB. */
 export interface PhotoRow {
   sha256: string;
   type: string;
   bytes: ArrayBuffer;
-  /** 0 or 1: booleans are not valid IndexedDB keys. */
-  uploaded: 0 | 1;
+  /** Indexed with clubId (version 3). */
+  state: PhotoState;
   clubId: string;
+  /** Why the server refused it, in the server's words; only with state `refused`. */
+  problem?: string;
 }

@@ -61,6 +61,19 @@ async function readBody<T>(response: Response): Promise<T> {
 
 /** JSON request to our API; throws ApiError for every failure, network ones included. */
 export async function apiRequest<T>(path: string, options: ApiRequestOptions = {}): Promise<T> {
+  return readBody<T>(await authorizedResponse(path, options));
+}
+
+/** A file from our API (CSV, PDF) with its name from Content-Disposition; errors as apiRequest's. */
+export async function apiFile(path: string, options: ApiRequestOptions = {}): Promise<{ blob: Blob; fileName: string | null }> {
+  const response = await authorizedResponse(path, options);
+  if (!response.ok) throw parseErrorBody(response.status, response.statusText, await response.text());
+  const disposition = response.headers.get('Content-Disposition') ?? '';
+  const fileName = /filename="?([^";]+)"?/i.exec(disposition)?.[1] ?? null;
+  return { blob: await response.blob(), fileName };
+}
+
+async function authorizedResponse(path: string, options: ApiRequestOptions): Promise<Response> {
   const auth = options.auth === false ? null : boundAuth;
   const token = auth ? await auth.getAccessToken() : null;
   let response = await send(path, options, token);
@@ -72,5 +85,5 @@ export async function apiRequest<T>(path: string, options: ApiRequestOptions = {
       if (response.status === 401) auth.sessionLost();
     }
   }
-  return readBody<T>(response);
+  return response;
 }

@@ -1,7 +1,9 @@
 import type { MutationResult, PushResponse } from '@breakline/sync-protocol';
+import { markPhotosDue } from '@/db/photos';
 import type { ReplicaDb } from '@/db/schema';
 import type { ConflictSeenRow, OutboxRow, RejectedRow } from '@/db/types';
 import { recomposeRows, stillShown } from '@/db/view';
+import { photoRefs } from './photo-refs';
 
 function rejectedRow(entry: OutboxRow, r: MutationResult, at: string): RejectedRow {
   const row: RejectedRow = {
@@ -20,12 +22,14 @@ function rejectedRow(entry: OutboxRow, r: MutationResult, at: string): RejectedR
 /**
  * Marks a batch's answers in one transaction. Accepted changes (applied, merged, conflict, and a
  * duplicate whose record exists) leave the queue but stay shown until the pull brings their
- * version; a refused one moves to the rejected list; one the server did not answer stays queued.
+ * version, and the photos they refer to become due for upload; a refused one moves to the
+ * rejected list; one the server did not answer stays queued.
  */
 export async function applyPushResults(db: ReplicaDb, batch: readonly OutboxRow[], response: PushResponse, at: string): Promise<void> {
   const byId = new Map(batch.map((e) => [e.mutation.mutationId, e]));
-  await db.transaction('rw', [db.records, db.outbox, db.rejected, db.conflictsSeen], async () => {
+  await db.transaction('rw', [db.records, db.outbox, db.rejected, db.conflictsSeen, db.photos], async () => {
     const touched: string[] = [];
+    const photos: string[] = [];
     for (const r of response.results) {
       const entry = byId.get(r.mutationId);
       if (!entry) continue;
@@ -39,6 +43,7 @@ export async function applyPushResults(db: ReplicaDb, batch: readonly OutboxRow[
         await db.outbox.delete(entry.seq); // a duplicate of a change that never made a record
         continue;
       }
+      photos.push(...photoRefs(entry.mutation.patch));
       const acked: OutboxRow = { ...entry, status: 'acked', ackVersion: r.version };
       const server = (await db.records.get(entry.recordId))?.server ?? null;
       if (stillShown(acked, server)) await db.outbox.put(acked);
@@ -50,5 +55,6 @@ export async function applyPushResults(db: ReplicaDb, batch: readonly OutboxRow[
       await db.conflictsSeen.bulkPut(seen);
     }
     await recomposeRows(db, touched);
+    await markPhotosDue(db, photos);
   });
 }

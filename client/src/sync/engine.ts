@@ -4,6 +4,7 @@ import type { SyncFailure } from '@/db/types';
 import { ScopeChangedError } from './auth-source';
 import { describeFailure } from './failure';
 import type { ProgressListener } from './progress';
+import { uploadPhotos } from './photo-upload';
 import { pullAll } from './pull';
 import { pushOutbox } from './push';
 import { syncRequest, type TransportContext } from './transport';
@@ -30,8 +31,10 @@ interface StatusAnswer {
 
 /**
  * One sync of the scope's club: send the outbox, then pull to the end, then ask how many
- * conflicts wait for a supervisor. Push comes first so the pull brings back our own accepted
- * changes and the acknowledged overlays can be let go. Callers hold the sync lock.
+ * conflicts wait for a supervisor, then upload the photos the sent records refer to. Push comes
+ * first so the pull brings back our own accepted changes and the acknowledged overlays can be
+ * let go; photos come last so the records, small and what the club cannot lose, go first on a
+ * weak signal. Callers hold the sync lock.
  */
 export async function syncOnce(ctx: SyncContext): Promise<SyncOutcome> {
   const { db, scope } = ctx;
@@ -43,6 +46,7 @@ export async function syncOnce(ctx: SyncContext): Promise<SyncOutcome> {
     const status = await syncRequest<StatusAnswer>(ctx, '/api/sync/status');
     const openConflicts = typeof status?.openConflicts === 'number' ? status.openConflicts : undefined;
     await updateClubState(db, scope.clubId, { lastSyncAt: stamp(), lastError: null, openConflicts });
+    await uploadPhotos(ctx);
     return { ok: true };
   } catch (error) {
     if (error instanceof ScopeChangedError) return { ok: false, scopeChanged: true };

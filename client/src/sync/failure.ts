@@ -1,5 +1,6 @@
 import { isApiError } from '@/lib/api-error';
 import type { SyncFailure } from '@/db/types';
+import { PhotoStoreUnavailableError } from './photo-upload';
 import { SignedOutError } from './transport';
 
 function isStorageFull(error: unknown): boolean {
@@ -18,6 +19,9 @@ export function describeFailure(error: unknown, at: string): SyncFailure {
   if (isApiError(error) && (error.status === 426 || error.code === 'protocol_outdated')) {
     return { reason: 'outdated', at, message: 'This app is out of date. It is fetching the new version; changes wait on this phone until then.' };
   }
+  if (error instanceof PhotoStoreUnavailableError) {
+    return { reason: 'photos', at, message: `Photos not sent yet: ${error.message}` };
+  }
   if (isApiError(error)) {
     return { reason: 'server', at, message: `The server could not sync: ${error.message}` };
   }
@@ -30,5 +34,5 @@ export function describeFailure(error: unknown, at: string): SyncFailure {
 
 /** Failures worth retrying on a timer; the others wait for the person (sign in) or an update. */
 export function retriesOnTimer(failure: SyncFailure): boolean {
-  return failure.reason === 'offline' || failure.reason === 'server' || failure.reason === 'app' || failure.reason === 'storage';
+  return ['offline', 'server', 'photos', 'app', 'storage'].includes(failure.reason);
 }

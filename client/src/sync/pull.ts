@@ -37,23 +37,40 @@ async function startReset(db: ReplicaDb, clubId: string): Promise<void> {
   });
 }
 
-/** Pulls pages until the server has nothing more; each page and its checkpoint commit together. */
+/**
+ * Pulls pages until the server has nothing more; each page and its checkpoint commit together.
+ * The next page is asked for while this one is written (its `since` is this page's checkpoint),
+ * so the server's work and IndexedDB's overlap instead of taking turns.
+ */
 export async function pullAll(ctx: PullContext): Promise<void> {
   const { db, scope } = ctx;
   const limit = ctx.pageSize ?? PULL_PAGE;
-  let received = 0;
-  let resets = 0;
-  for (;;) {
-    const { checkpoint } = await loadClubState(db, scope.clubId);
+  const ask = async (since: string | undefined): Promise<PullResponse> => {
     const query = new URLSearchParams({ limit: String(limit) });
-    if (checkpoint !== undefined) query.set('since', checkpoint);
+    if (since !== undefined) query.set('since', since);
     const page = await syncRequest<unknown>(ctx, `/api/sync/pull?${query}`);
     if (!isPullResponse(page)) throw new ApiError(200, 'bad_response', 'The server sent a pull answer Breakline cannot read.');
+    return page;
+  };
+  let received = 0;
+  let resets = 0;
+  let since = (await loadClubState(db, scope.clubId)).checkpoint;
+  let next = ask(since);
+  for (;;) {
+    const page = await next;
     if (page.resetRequired) {
       // Asked again while already pulling afresh: going on would pull for ever.
-      if (checkpoint === undefined || ++resets > 1) throw new ApiError(200, 'bad_response', RESET_LOOP);
+      if (since === undefined || ++resets > 1) throw new ApiError(200, 'bad_response', RESET_LOOP);
       await startReset(db, scope.clubId);
+      since = undefined;
+      next = ask(since);
       continue;
+    }
+    if (page.hasMore) {
+      since = page.checkpoint;
+      next = ask(since);
+      // Should writing this page fail, the answer to the early request is dropped unread.
+      next.catch(() => undefined);
     }
     await applyPullPage(db, scope.clubId, page, ctx.now());
     received += page.changes.length;

@@ -6,7 +6,7 @@ import { syncOnce, type SyncOutcome } from './engine';
 import { retriesOnTimer } from './failure';
 import { withLock } from './lock';
 import { requestPersistentStorage } from './persist';
-import { askForBackgroundSync, listenForTriggers, type TriggerTimers } from './triggers';
+import { askForBackgroundSync, backgroundSyncDone, listenForTriggers, type TriggerTimers } from './triggers';
 
 export interface RunnerDeps extends Partial<TriggerTimers> {
   auth: SyncAuth;
@@ -22,7 +22,9 @@ export interface RunnerDeps extends Partial<TriggerTimers> {
  * second sync beside it. A failure worth retrying sets a backoff timer; a success clears it.
  */
 export class SyncRunner {
-  private running: Promise<void> | null = null;
+  private running: Promise<boolean> | null = null;
+  /** Whether the last run went through, for the service worker's background sync. */
+  private lastOk = false;
   private again = false;
   private failures = 0;
   private retry: unknown = null;
@@ -37,8 +39,8 @@ export class SyncRunner {
     };
   }
 
-  /** Sync now, or once more after the sync under way; resolves when no run is left. */
-  requestSync(): Promise<void> {
+  /** Sync now, or once more after the sync under way; resolves, when no run is left, whether the last went through. */
+  requestSync(): Promise<boolean> {
     if (this.running) {
       this.again = true;
       return this.running;
@@ -48,6 +50,7 @@ export class SyncRunner {
         this.again = false;
         await this.runOnce();
       } while (this.again);
+      return this.lastOk;
     })().finally(() => {
       this.running = null;
       syncActivity.set({ running: false, progress: null });
@@ -57,12 +60,14 @@ export class SyncRunner {
 
   /** Resolves when no sync is running (or queued to run again). */
   idle(): Promise<void> {
-    return this.running ?? Promise.resolve();
+    return this.running ? this.running.then(() => undefined) : Promise.resolve();
   }
 
   private async runOnce(): Promise<void> {
+    this.lastOk = false;
     const scope = this.deps.auth.scope();
-    if (!scope) return; // signed out: the outbox waits in that person's replica
+    // Signed out: the outbox waits in that person's replica. Other members of a shared device still send theirs.
+    if (!scope) return this.sendForOthers();
     const db = this.deps.openDb(scope.userId);
     syncActivity.set({ running: true, progress: null });
     const outcome: SyncOutcome = await withLock(`breakline-sync:${scope.userId}`, () =>
@@ -73,13 +78,33 @@ export class SyncRunner {
       }),
     );
     this.settle(outcome);
+    await this.sendForOthers();
+  }
+
+  /**
+   * On a shared device, each other signed-in member with changes waiting gets a sync of their
+   * own replica with their own tokens. Best effort: a failure is kept in that member's status
+   * and retried on the next trigger; the backoff follows the active member alone.
+   */
+  private async sendForOthers(): Promise<void> {
+    for (const auth of this.deps.auth.others?.() ?? []) {
+      const scope = auth.scope();
+      if (!scope) continue;
+      const db = this.deps.openDb(scope.userId);
+      if ((await db.outbox.where('[clubId+status]').equals([scope.clubId, 'pending']).count()) === 0) continue;
+      await withLock(`breakline-sync:${scope.userId}`, () =>
+        syncOnce({ db, scope, auth, fetch: this.deps.fetch, now: this.deps.now ?? Date.now, onOutdated: this.deps.onOutdated }),
+      );
+    }
   }
 
   private settle(outcome: SyncOutcome): void {
     if (this.retry !== null) this.timers.clearTimer(this.retry);
     this.retry = null;
+    this.lastOk = outcome.ok;
     if (outcome.ok) {
       this.failures = 0;
+      backgroundSyncDone();
       return;
     }
     if ('scopeChanged' in outcome) {
@@ -96,7 +121,7 @@ export class SyncRunner {
   /** App start: sync now, listen for the triggers, and ask to keep the data. Returns a stop function. */
   start(): () => void {
     this.stopped = false;
-    const stop = listenForTriggers(() => void this.requestSync(), this.timers);
+    const stop = listenForTriggers(() => this.requestSync(), this.timers);
     void requestPersistentStorage().then((storage) => syncActivity.set({ storage }));
     void this.requestSync();
     return () => {

@@ -1,11 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { headline, lastSyncText, progressText, rejectedTitle, relativeTime, waitingText } from './status-text';
+import { headline, lastSyncText, photosWaitingText, progressText, rejectedTitle, relativeTime, waitingText } from './status-text';
 import type { SyncStatus } from './status';
 
 const NOW = Date.parse('2026-12-06T09:00:00Z');
 const idle: SyncStatus = {
   waiting: 0, lastSyncAt: null, lastError: null, openConflicts: 0, rejected: [], raisedConflicts: [],
-  running: false, progress: null, storage: 'persisted',
+  photosWaiting: 0, refusedPhotos: [], running: false, progress: null, storage: 'persisted',
 };
 
 describe('sync status words', () => {
@@ -24,6 +24,17 @@ describe('sync status words', () => {
     expect(progressText({ running: true, progress: { phase: 'receiving', done: 2000, more: true } })).toBe('Receiving changes: 2,000 so far');
     expect(progressText({ running: false, progress: null })).toBeNull();
     expect(lastSyncText(null, NOW)).toBe('Not synced yet on this phone');
+  });
+
+  it('counts photos waiting and shows their upload as n of m', () => {
+    expect(photosWaitingText(0)).toBeNull();
+    expect(photosWaitingText(1)).toBe('1 photo waiting to be sent');
+    expect(progressText({ running: true, progress: { phase: 'photos', done: 2, total: 5 } })).toBe('Sending photos: 2 of 5');
+    expect(headline({ ...idle, photosWaiting: 2 }, NOW)).toBe('2 photos waiting to be sent');
+    // Changes come first: photos go after the records that refer to them.
+    expect(headline({ ...idle, waiting: 1, photosWaiting: 2 }, NOW)).toBe('1 change waiting to be sent');
+    const failure = { reason: 'photos' as const, message: 'Photos not sent yet: the store is down.', at: '2026-12-06T08:00:00Z' };
+    expect(headline({ ...idle, photosWaiting: 2, lastError: failure }, NOW)).toBe('Photos not sent');
   });
 
   it('puts a failure before the count, and the count before the last sync', () => {

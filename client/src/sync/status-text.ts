@@ -8,6 +8,7 @@ const FAILURE_HEADLINE: Record<FailureReason, string> = {
   outdated: 'App out of date',
   server: 'Server error',
   storage: 'Phone storage full',
+  photos: 'Photos not sent',
   app: 'Sync stopped',
 };
 
@@ -31,6 +32,11 @@ export function waitingText(waiting: number): string {
   return waiting === 0 ? 'All changes sent' : `${plural(waiting, 'change')} waiting to be sent`;
 }
 
+/** Null when no photo waits, so the line is left out. */
+export function photosWaitingText(waiting: number): string | null {
+  return waiting === 0 ? null : `${plural(waiting, 'photo')} waiting to be sent`;
+}
+
 export function lastSyncText(lastSyncAt: string | null, now: number): string {
   return lastSyncAt ? `Last synced ${relativeTime(lastSyncAt, now)}` : 'Not synced yet on this phone';
 }
@@ -40,6 +46,7 @@ export function progressText(s: Pick<SyncStatus, 'running' | 'progress'>): strin
   const p = s.progress;
   if (!p) return 'Syncing…';
   if (p.phase === 'sending') return `Sending changes: ${p.done.toLocaleString('en')} of ${p.total.toLocaleString('en')}`;
+  if (p.phase === 'photos') return `Sending photos: ${p.done.toLocaleString('en')} of ${p.total.toLocaleString('en')}`;
   return `Receiving changes: ${p.done.toLocaleString('en')}${p.more ? ' so far' : ''}`;
 }
 
@@ -52,7 +59,9 @@ export function headline(s: SyncStatus, now: number): string {
   return (
     progressText(s) ??
     (s.lastError ? FAILURE_HEADLINE[s.lastError.reason] : null) ??
-    (s.waiting > 0 ? waitingText(s.waiting) : lastSyncText(s.lastSyncAt, now))
+    (s.waiting > 0 ? waitingText(s.waiting) : null) ??
+    photosWaitingText(s.photosWaiting) ??
+    lastSyncText(s.lastSyncAt, now)
   );
 }
 

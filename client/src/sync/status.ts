@@ -1,5 +1,6 @@
 import { useSyncExternalStore } from 'react';
 import { useLiveQuery } from 'dexie-react-hooks';
+import { countPhotosIn, retryRefusedPhoto } from '@/db/photos';
 import { loadClubState } from '@/db/replica-state';
 import type { ReplicaDb } from '@/db/schema';
 import type { ConflictSeenRow, RejectedRow, SyncFailure } from '@/db/types';
@@ -13,6 +14,15 @@ export interface StoredSyncStatus {
   openConflicts: number;
   rejected: RejectedRow[];
   raisedConflicts: ConflictSeenRow[];
+  /** Photos whose records were sent, still to be uploaded. */
+  photosWaiting: number;
+  /** Photos the server refused, kept on this phone with its reason. */
+  refusedPhotos: RefusedPhoto[];
+}
+
+export interface RefusedPhoto {
+  sha256: string;
+  problem: string;
 }
 
 export async function readSyncStatus(db: ReplicaDb, clubId: string): Promise<StoredSyncStatus> {
@@ -24,6 +34,12 @@ export async function readSyncStatus(db: ReplicaDb, clubId: string): Promise<Sto
     openConflicts: state.openConflicts ?? 0,
     rejected: await db.rejected.where('clubId').equals(clubId).sortBy('at'),
     raisedConflicts: await db.conflictsSeen.where('clubId').equals(clubId).sortBy('at'),
+    photosWaiting: await countPhotosIn(db, clubId, 'due'),
+    // Refused photos are rare, so reading their rows (bytes and all) for the reason costs little.
+    refusedPhotos: (await db.photos.where('[clubId+state]').equals([clubId, 'refused']).toArray()).map((p) => ({
+      sha256: p.sha256,
+      problem: p.problem ?? 'The server did not take this photo.',
+    })),
   };
 }
 
@@ -34,6 +50,11 @@ export function useSyncStatus(db: ReplicaDb, clubId: string): SyncStatus | undef
   const activity = useSyncExternalStore(syncActivity.subscribe, syncActivity.getSnapshot);
   const stored = useLiveQuery(() => readSyncStatus(db, clubId), [db, clubId]);
   return stored && { ...stored, ...activity };
+}
+
+/** The person asks to send a refused photo again; the next sync tries it. */
+export async function retryPhoto(db: ReplicaDb, sha256: string): Promise<void> {
+  await retryRefusedPhoto(db, sha256);
 }
 
 /** The person has read a refused change; it leaves the list. */

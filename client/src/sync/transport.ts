@@ -28,19 +28,21 @@ async function encodeBody(json: string, gzip: boolean): Promise<{ body: BodyInit
   return { body: new Uint8Array(await new Response(stream).arrayBuffer()), encoding: 'gzip' };
 }
 
+export interface SendInit {
+  method: 'GET' | 'HEAD' | 'POST' | 'PUT';
+  headers?: Record<string, string>;
+  body?: BodyInit;
+}
+
 /**
- * A sync request with the bearer token, one refresh on a 401, and a gzip body where possible.
- * apiRequest cannot send a compressed body, so this does its own fetch with the same rules.
+ * One request with the bearer token and one refresh on a 401; the answer as it came, whatever
+ * its status. A network failure is ApiError network_error; a session that is over, SignedOutError.
  */
-export async function syncRequest<T>(ctx: TransportContext, path: string, body?: unknown): Promise<T> {
+export async function authorizedSend(ctx: TransportContext, path: string, init: SendInit): Promise<Response> {
   const send = ctx.fetch ?? ((...args: Parameters<typeof fetch>) => fetch(...args));
-  const encoded = body === undefined ? undefined : await encodeBody(JSON.stringify(body), ctx.gzip ?? true);
   const go = async (token: string) => {
-    const headers: Record<string, string> = { Accept: 'application/json', Authorization: `Bearer ${token}` };
-    if (encoded) headers['Content-Type'] = 'application/json';
-    if (encoded?.encoding) headers['Content-Encoding'] = encoded.encoding;
     try {
-      return await send(path, { method: body === undefined ? 'GET' : 'POST', headers, body: encoded?.body });
+      return await send(path, { method: init.method, headers: { ...init.headers, Authorization: `Bearer ${token}` }, body: init.body });
     } catch {
       throw new ApiError(0, 'network_error', NETWORK_ERROR_MESSAGE);
     }
@@ -57,6 +59,19 @@ export async function syncRequest<T>(ctx: TransportContext, path: string, body?:
       throw new SignedOutError();
     }
   }
+  return response;
+}
+
+/**
+ * A sync request with the bearer token, one refresh on a 401, and a gzip body where possible.
+ * apiRequest cannot send a compressed body, so this does its own fetch with the same rules.
+ */
+export async function syncRequest<T>(ctx: TransportContext, path: string, body?: unknown): Promise<T> {
+  const encoded = body === undefined ? undefined : await encodeBody(JSON.stringify(body), ctx.gzip ?? true);
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (encoded) headers['Content-Type'] = 'application/json';
+  if (encoded?.encoding) headers['Content-Encoding'] = encoded.encoding;
+  const response = await authorizedSend(ctx, path, { method: body === undefined ? 'GET' : 'POST', headers, body: encoded?.body });
   const text = await response.text();
   if (!response.ok) throw parseErrorBody(response.status, response.statusText, text);
   try {

@@ -11,21 +11,35 @@ export interface TriggerTimers {
   clearTimer: (handle: unknown) => void;
 }
 
-/** Calls `sync` when the phone comes online, the app comes to the front, the worker asks, or after writes. */
-export function listenForTriggers(sync: () => void, timers: TriggerTimers): () => void {
-  const onOnline = () => sync();
+/** What the page answers the worker on the port it sent: whether the sync went through. */
+export interface BackgroundSyncAnswer {
+  type: typeof BACKGROUND_SYNC_MESSAGE;
+  ok: boolean;
+}
+
+/**
+ * Calls `sync` when the phone comes online, the app comes to the front, the worker asks, or after
+ * writes. `sync` resolves whether it went through; the worker hears that on the port it sent, so
+ * the browser tries its background sync again later when it did not.
+ */
+export function listenForTriggers(sync: () => Promise<boolean>, timers: TriggerTimers): () => void {
+  const onOnline = () => void sync();
   const onVisible = () => {
-    if (document.visibilityState === 'visible') sync();
+    if (document.visibilityState === 'visible') void sync();
   };
   const onMessage = (event: MessageEvent) => {
-    if ((event.data as { type?: unknown } | null)?.type === BACKGROUND_SYNC_MESSAGE) sync();
+    if ((event.data as { type?: unknown } | null)?.type !== BACKGROUND_SYNC_MESSAGE) return;
+    const port = event.ports?.[0];
+    void sync().then((ok) => port?.postMessage({ type: BACKGROUND_SYNC_MESSAGE, ok } satisfies BackgroundSyncAnswer));
   };
   let pending: unknown = null;
   const stopWrites = localWrites.subscribe(() => {
+    // Offline: ask the browser now to wake us when signal returns, even if the app is closed first.
+    if (isOffline()) void askForBackgroundSync();
     if (pending !== null) timers.clearTimer(pending);
     pending = timers.setTimer(() => {
       pending = null;
-      sync();
+      void sync();
     }, AFTER_WRITE_DELAY_MS);
   });
   const worker = typeof navigator !== 'undefined' ? navigator.serviceWorker : undefined;
@@ -41,8 +55,26 @@ export function listenForTriggers(sync: () => void, timers: TriggerTimers): () =
   };
 }
 
-/** Asks the browser to wake the worker when a connection returns, where background sync exists. */
+export function isOffline(): boolean {
+  return typeof navigator !== 'undefined' && navigator.onLine === false;
+}
+
+let askedSinceSync = false;
+
+/** A sync went through: the next time the phone is offline with changes, ask the browser again. */
+export function backgroundSyncDone(): void {
+  askedSinceSync = false;
+}
+
+/**
+ * Asks the browser to wake the worker when a connection returns, where background sync exists.
+ * Once until a sync goes through: a browser that thinks it is online (one bar, a captive portal)
+ * fires the event at once, and asking again from the failed sync it started would go round and
+ * round without the backoff. The browser retries a failed event on its own schedule.
+ */
 export async function askForBackgroundSync(): Promise<void> {
+  if (askedSinceSync) return;
+  askedSinceSync = true;
   try {
     const registration = await navigator.serviceWorker?.getRegistration();
     const sync = (registration as { sync?: { register(tag: string): Promise<void> } } | undefined)?.sync;

@@ -29,7 +29,8 @@ export function mockApi(handlers: Record<string, Handler | MockAnswer>) {
       body: typeof init.body === 'string' ? JSON.parse(init.body) : undefined,
     };
     calls.push(call);
-    const handler = handlers[`${call.method} ${path}`];
+    // A handler for the bare path answers any query string, unless one names the query too.
+    const handler = handlers[`${call.method} ${path}`] ?? handlers[`${call.method} ${path.split('?')[0]}`];
     if (!handler) throw new TypeError(`Failed to fetch (no mock for ${call.method} ${path})`);
     const answer = typeof handler === 'function' ? await handler(call) : handler;
     const text = answer.body === undefined ? null : JSON.stringify(answer.body);

@@ -1,11 +1,11 @@
 import { decodeHlc, maxEncodedHlc } from '../hlc.js';
 import { assertNotAhead, type HybridClock } from '../hybrid-clock.js';
 import { ClockDriftError } from '../hlc-errors.js';
-import { validatePatch, validateRecord, describeErrors } from '../validate.js';
+import { patchIsValid, validateChangedRecord, validatePatch, validateRecord, describeErrors, type Validation } from '../validate.js';
 import { checkCreate, checkDelete, checkUpdate } from '../permissions.js';
 import { mergeMutation } from '../merge.js';
 import type { Actor } from '../merge-types.js';
-import type { Mutation, MutationError, MutationResult } from '../wire.js';
+import type { Fields, Mutation, MutationError, MutationResult } from '../wire.js';
 import { deepEqual } from '../deep-equal.js';
 import type { AuthContext, ClubState, StoredRecord } from './club-state.js';
 import { recordConflicts } from './conflicts.js';
@@ -17,6 +17,12 @@ export interface ApplyContext {
   pt: number;
   clock: HybridClock;
   newId: () => string;
+  /**
+   * Records' `fields` objects that passed validateRecord during this batch, with what the parse
+   * gave: a later change to the same record parses only the fields it changes. Give a new map
+   * each batch; records must not be changed in place while it lives.
+   */
+  validated?: Map<Fields, Fields>;
 }
 
 const rejected = (m: Mutation, error: MutationError): MutationResult => ({ mutationId: m.mutationId, status: 'rejected', error });
@@ -30,19 +36,29 @@ export function applyMutation(ctx: ApplyContext, m: Mutation): MutationResult {
     if (e instanceof ClockDriftError) return rejected(m, { code: 'clock-drift', message: e.message });
     throw e;
   }
-  const valid = validatePatch(m.kind, m.patch);
-  if (!valid.ok) return rejected(m, { code: 'invalid', message: describeErrors(valid.errors), fields: valid.errors });
   const stored: StoredRecord | undefined = club.records[m.recordId];
   const actor: Actor = { deviceId: ctx.deviceId, userId: auth.userId, role: auth.role };
-
+  // Each mutation's fields are parsed once: the patch's own errors come first, as they always did.
+  const patchRefused = (): MutationResult | undefined => {
+    if (patchIsValid(m.kind, m.patch)) return undefined;
+    const valid = validatePatch(m.kind, m.patch);
+    return valid.ok ? undefined : rejected(m, { code: 'invalid', message: describeErrors(valid.errors), fields: valid.errors });
+  };
+  let created: Validation<Fields> | undefined;
   if (!stored) {
     if (m.baseVersion !== 0 || m.deleted) {
-      return rejected(m, { code: 'not-found', message: 'This record is not on the server, so the change could not be saved.' });
+      return patchRefused() ?? rejected(m, { code: 'not-found', message: 'This record is not on the server, so the change could not be saved.' });
     }
-    const full = validateRecord(m.kind, m.patch);
-    if (!full.ok) return rejected(m, { code: 'invalid', message: describeErrors(full.errors), fields: full.errors });
-  } else if (stored.kind !== m.kind) {
-    return rejected(m, { code: 'invalid', message: `This record is ${stored.kind}, not ${m.kind}.` });
+    // A whole record that passes holds a patch that passes, so the patch is parsed apart only when it fails.
+    created = validateRecord(m.kind, m.patch);
+    if (!created.ok) {
+      const errors = created.errors;
+      return patchRefused() ?? rejected(m, { code: 'invalid', message: describeErrors(errors), fields: errors });
+    }
+  } else {
+    const refused = patchRefused();
+    if (refused) return refused;
+    if (stored.kind !== m.kind) return rejected(m, { code: 'invalid', message: `This record is ${stored.kind}, not ${m.kind}.` });
   }
   const decision = !stored
     ? checkCreate(m.kind, auth.role, m.patch, auth.userId)
@@ -64,8 +80,9 @@ export function applyMutation(ctx: ApplyContext, m: Mutation): MutationResult {
   const fields = { ...(stored?.fields ?? {}), ...merge.apply };
   const changed = !stored || merge.deleted !== stored.deleted || !deepEqual(fields, stored.fields);
   if (changed && !merge.deleted) {
-    const full = validateRecord(m.kind, fields);
+    const full = created?.ok && sameEntries(fields, m.patch) ? created : validateMerged(ctx, m, stored, fields, Object.keys(merge.apply));
     if (!full.ok) return rejected(m, { code: 'invalid', message: `After merging with newer changes: ${describeErrors(full.errors)}`, fields: full.errors });
+    ctx.validated?.set(fields, full.value);
   }
   ctx.clock.receive(decodeHlc(m.hlc), pt);
   let record = stored;
@@ -93,4 +110,18 @@ export function applyMutation(ctx: ApplyContext, m: Mutation): MutationResult {
   const result: MutationResult = { mutationId: m.mutationId, status: merge.status, version: record!.version };
   if (conflictIds.length > 0) Object.assign(result, { conflictId: conflictIds[0], conflictIds });
   return result;
+}
+
+/** Same keys, each holding the very same value: a new record's fields copied from its patch. */
+function sameEntries(a: Fields, b: Fields): boolean {
+  const keys = Object.keys(a);
+  if (keys.length !== Object.keys(b).length) return false;
+  for (const k of keys) if (a[k] !== b[k] || !Object.prototype.hasOwnProperty.call(b, k)) return false;
+  return true;
+}
+
+/** The merged record's validation; a record this batch already validated has only its changed fields parsed. */
+function validateMerged(ctx: ApplyContext, m: Mutation, stored: StoredRecord | undefined, fields: Fields, changed: string[]): Validation<Fields> {
+  const known = stored && stored.kind === m.kind ? ctx.validated?.get(stored.fields) : undefined;
+  return known ? validateChangedRecord(m.kind, known as never, fields, changed) : validateRecord(m.kind, fields);
 }

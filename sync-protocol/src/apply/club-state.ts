@@ -22,7 +22,7 @@ export interface ClubState {
   changeSeq: number;
   deviceSeq: Record<string, number>;
   conflicts: ConflictRecord[];
-  /** Tombstones changed at or before this sequence have been purged. */
+  /** The purge horizon: the newest change seq of a tombstone purged so far (checkpoints carry it). */
   purgedThrough: number;
 }
 

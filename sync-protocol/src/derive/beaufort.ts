@@ -13,6 +13,14 @@ export function toKnots(speed: number, unit: WindSpeedUnit): number {
   return unit === 'm/s' ? speed / METRES_PER_SECOND_PER_KNOT : (speed * 1000) / 1852;
 }
 
+/** A speed in knots in another unit, for showing a stored knot figure in the club's unit. */
+export function fromKnots(knots: number, unit: WindSpeedUnit): number {
+  requireNonNegative('Wind speed', knots);
+  requireOneOf('Wind speed unit', unit, WIND_SPEED_UNITS);
+  if (unit === 'kn') return knots;
+  return unit === 'm/s' ? knots * METRES_PER_SECOND_PER_KNOT : (knots * 1852) / 1000;
+}
+
 /**
  * The whole-knot speed the tables are looked up with. The knot table is written in whole knots
  * and winds are reported in whole knots, so a fractional mean is rounded to the nearest knot,

@@ -7,5 +7,6 @@ export * from './fuel.js';
 export * from './service.js';
 export * from './readiness.js';
 export * from './awards.js';
+export * from './crew-currency.js';
 export * from './season.js';
 export { addMonthsClamped, addDays, daysBetween } from './calendar.js';

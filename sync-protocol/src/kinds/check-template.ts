@@ -39,7 +39,11 @@ const section = z.strictObject({
   items: z.array(item).min(1).max(100),
 });
 
-/** A club's checklist; a change makes a new templateVersion so old checks keep their meaning. */
+/**
+ * One version of a club's checklist. An edit is saved as a new record with the next
+ * templateVersion; a saved version's content never changes, so a check keeps the meaning of the
+ * template it was run against. Only `retired` may change afterwards.
+ */
 export const checkTemplateSpec = defineKind({
   label: 'a check template',
   schema: z.strictObject({
@@ -49,8 +53,9 @@ export const checkTemplateSpec = defineKind({
     sections: z.array(section).min(1).max(30),
     retired: z.boolean(),
   }),
-  immutable: ['checkType'],
-  access: { create: 'supervisor', update: 'supervisor', delete: 'admin' },
+  immutable: ['checkType', 'name', 'templateVersion', 'sections'],
+  // Club set-up is the admin's; supervisors run the checks and defects made from it.
+  access: { create: 'admin', update: 'admin', delete: 'admin' },
   recordChecks: (t) => {
     const ids = t.sections.flatMap((s) => s.items.map((i) => i.id));
     const dup = ids.find((id, i) => ids.indexOf(id) !== i);

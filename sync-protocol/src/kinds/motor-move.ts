@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { recordId, text, utcTime } from './common.js';
+import { memberId, recordId, text, utcTime } from './common.js';
 import { defineKind } from './spec.js';
 
 /** A motor taken off one boat and put on another (null: the store). Moves are history. */
@@ -10,9 +10,11 @@ export const motorMoveSpec = defineKind({
     fromBoatId: recordId().nullable(),
     toBoatId: recordId().nullable(),
     movedAt: utcTime(),
+    /** The member who moved it, for the motor's history. */
+    movedBy: memberId(),
     reason: text(500),
   }),
-  immutable: ['motorId'],
+  immutable: ['motorId', 'movedBy'],
   access: { create: 'driver', update: 'supervisor', delete: 'supervisor' },
   recordChecks: (m) =>
     m.fromBoatId === m.toBoatId

@@ -11,6 +11,7 @@ export const RECORD_KINDS = [
   'incidentNote',
   'serviceRecord',
   'daySignOff',
+  'member',
 ] as const;
 export type RecordKind = (typeof RECORD_KINDS)[number];
 

@@ -1,6 +1,7 @@
 import { HybridClock } from '../hybrid-clock.js';
 import { canSee } from '../permissions.js';
-import { PushRequestSchema, PullQuerySchema } from '../wire-schemas.js';
+import { parsePushRequest, PullQuerySchema } from '../wire-schemas.js';
+import { formatCheckpoint, needsFreshStart, parseCheckpoint } from '../wire-checkpoint.js';
 import { PROTOCOL_VERSION } from '../wire.js';
 import type { ConflictRecord, MutationResult, PullResponse, PushResponse, SettleRequest, SyncRecord } from '../wire.js';
 import { cloneJson } from '../deep-equal.js';
@@ -42,11 +43,12 @@ export class MemorySyncServer {
   push(auth: AuthContext, body: unknown, pt: number): PushResponse {
     if (typeof body !== 'object' || body === null) throw new SyncRequestError(400, 'Malformed push: expected a JSON object.');
     checkProtocol((body as { protocolVersion?: unknown } | null)?.protocolVersion);
-    const parsed = PushRequestSchema.safeParse(body);
+    const parsed = parsePushRequest(body);
     if (!parsed.success) throw new SyncRequestError(400, `Malformed push: ${parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
     const { deviceId, mutations } = parsed.data;
     const club = cloneJson(this.club(auth.clubId));
     const results: MutationResult[] = [];
+    const ctx = { club, auth, deviceId, pt, clock: this.clock, newId: this.newId, validated: new Map() };
     for (const m of mutations) {
       const last = club.deviceSeq[deviceId] ?? 0;
       if (m.seq <= last) {
@@ -54,7 +56,7 @@ export class MemorySyncServer {
         results.push({ mutationId: m.mutationId, status: 'duplicate', ...(rec ? { version: rec.version } : {}) });
         continue;
       }
-      results.push(applyMutation({ club, auth, deviceId, pt, clock: this.clock, newId: this.newId }, m));
+      results.push(applyMutation(ctx, m));
       club.deviceSeq[deviceId] = m.seq;
     }
     this.clubs.set(auth.clubId, club);
@@ -66,19 +68,20 @@ export class MemorySyncServer {
     const q = PullQuerySchema.safeParse(query);
     if (!q.success) throw new SyncRequestError(400, `Malformed pull: ${q.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
     const club = this.club(auth.clubId);
-    const since = Number(q.data.since ?? 0);
+    const horizon = club.purgedThrough;
+    const since = parseCheckpoint(q.data.since);
     // A replica that pulled before purged tombstones may hold records that are gone.
-    if (since > 0 && since < club.purgedThrough) return { changes: [], checkpoint: String(club.changeSeq), hasMore: false, resetRequired: true };
-    const after = Object.values(club.records).filter((r) => r.changeSeq > since).sort((a, b) => a.changeSeq - b.changeSeq);
+    if (needsFreshStart(since, horizon)) return { changes: [], checkpoint: formatCheckpoint({ horizon, seq: club.changeSeq }), hasMore: false, resetRequired: true };
+    const after = Object.values(club.records).filter((r) => r.changeSeq > since.seq).sort((a, b) => a.changeSeq - b.changeSeq);
     const changes: SyncRecord[] = [];
-    let checkpoint = since;
+    let checkpoint = since.seq;
     let i = 0;
     for (; i < after.length && changes.length < q.data.limit; i++) {
       const r = after[i]!;
       checkpoint = r.changeSeq;
       if (canSee(r.kind, auth.role, r.fields, auth.userId)) changes.push(toWire(r));
     }
-    return { changes, checkpoint: String(checkpoint), hasMore: i < after.length };
+    return { changes, checkpoint: formatCheckpoint({ horizon, seq: checkpoint }), hasMore: i < after.length };
   }
 
   settle(auth: AuthContext, body: SettleRequest, pt: number): ConflictRecord {
@@ -89,12 +92,17 @@ export class MemorySyncServer {
     return settled;
   }
 
-  /** Drop tombstones changed at or before `throughSeq`; clients behind it must reset. */
+  /**
+   * Drop tombstones changed at or before `throughSeq`. The horizon moves to the newest change
+   * dropped, as on the real server; replicas that pulled below it before now must reset.
+   */
   purgeTombstones(clubId: string, throughSeq: number): number {
     const club = this.club(clubId);
     const gone = Object.values(club.records).filter((r) => r.deleted && r.changeSeq <= throughSeq);
-    for (const r of gone) delete club.records[r.id];
-    club.purgedThrough = Math.max(club.purgedThrough, throughSeq);
+    for (const r of gone) {
+      delete club.records[r.id];
+      club.purgedThrough = Math.max(club.purgedThrough, r.changeSeq);
+    }
     return gone.length;
   }
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
-  beaufortForce, beaufortTerm, describeWind, marineWindWarning, toKnots, type WindSpeedUnit,
+  beaufortForce, beaufortTerm, describeWind, fromKnots, marineWindWarning, toKnots, type WindSpeedUnit,
 } from '../../src/derive/beaufort.js';
 import { nextDown } from './support.js';
 
@@ -43,6 +43,15 @@ describe('other units, converted with the exact knot', () => {
     // NIST SP 811 (2008) App. B.8: 1 knot = 1852/3600 m/s exactly
     expect(toKnots(1852 / 3600, 'm/s')).toBeCloseTo(1, 14);
     expect(toKnots(1.852, 'km/h')).toBeCloseTo(1, 14);
+  });
+
+  it('shows a knot figure in the club unit with the same exact knot, and back', () => {
+    // NIST SP 811 (2008) App. B.8: 1 knot = 1852/3600 m/s exactly
+    expect(fromKnots(1, 'km/h')).toBeCloseTo(1.852, 14);
+    expect(fromKnots(10, 'm/s')).toBeCloseTo(5.144444444, 9);
+    expect(fromKnots(12, 'kn')).toBe(12);
+    for (const unit of ['kn', 'm/s', 'km/h'] as const) expect(toKnots(fromKnots(17.3, unit), unit)).toBeCloseTo(17.3, 12);
+    expect(() => fromKnots(-1, 'kn')).toThrow(/Wind speed/);
   });
 
   it.each([

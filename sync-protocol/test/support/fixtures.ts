@@ -39,7 +39,7 @@ export const FIXTURES: { [K in RecordKind]: KindFields[K] } = {
     premixRatio: 50,
     boatId: ID.boat,
   },
-  motorMove: { motorId: ID.motor, fromBoatId: ID.boat, toBoatId: ID.boat2, movedAt: AT, reason: 'starter cord frayed' },
+  motorMove: { motorId: ID.motor, fromBoatId: ID.boat, toBoatId: ID.boat2, movedAt: AT, movedBy: 'member-ben', reason: 'starter cord frayed' },
   checkTemplate: {
     checkType: 'launch',
     name: 'Launch check',
@@ -123,4 +123,12 @@ export const FIXTURES: { [K in RecordKind]: KindFields[K] } = {
   },
   serviceRecord: { motorId: ID.motor, servicedAt: AT, engineHours: 212.5, work: 'Gearbox oil changed', performedBy: 'club gear officer' },
   daySignOff: { sessionDate: '2026-12-06', boatId: null, signedOffBy: 'member-ben', signedOffAt: AT, note: 'All boats washed down' },
+  member: {
+    memberId: 'member-ben',
+    displayName: 'Ben Arkwright',
+    awards: [
+      { id: 'irb-driver', name: 'IRB driver award', qualifies: 'driver', awardedOn: '2025-10-04', expiresOn: '2027-06-30' },
+      { id: 'irb-crew', name: 'IRB crew award', qualifies: 'crew', awardedOn: '2024-09-14', expiresOn: null },
+    ],
+  },
 };

@@ -1,18 +1,23 @@
-import { EmptyState } from '@/components/empty-state';
-import { PageHeader } from '@/components/page-header';
 import { canAdminister } from '@/features/auth/roles';
-import { RoleGate } from './role-gate';
+import { useCaughtMailOn } from '@/features/admin/api/caught-mail';
+import { MembersScreen } from '@/features/admin/components/members-screen';
+import { PageHeader } from '@/components/page-header';
+import { DeskGate } from './desk-gate';
 
 export function AdminPage() {
   return (
+    <DeskGate title="Admin" allowed={canAdminister} who="admins">
+      <Members />
+    </DeskGate>
+  );
+}
+
+function Members() {
+  const caught = useCaughtMailOn();
+  return (
     <>
-      <PageHeader title="Admin" subtitle="Club set-up" />
-      <RoleGate allowed={canAdminister} who="admins">
-        <EmptyState title="Nothing set up here yet">
-          Members, invitations, roles and awards; boats, motors and their specifications; check templates; and the
-          club's time zone, location and units will be managed here.
-        </EmptyState>
-      </RoleGate>
+      <PageHeader title="Admin: members" subtitle="Invite people by e-mail, and choose each member's role in this club" />
+      <MembersScreen showCaughtMail={caught} />
     </>
   );
 }

@@ -1,18 +1,26 @@
-import { EmptyState } from '@/components/empty-state';
-import { PageHeader } from '@/components/page-header';
+import { useSearchParams } from 'react-router-dom';
 import { canUseReviewDesk } from '@/features/auth/roles';
-import { RoleGate } from './role-gate';
+import { useSession } from '@/features/auth/use-auth';
+import { DeskFrame } from '@/features/review/components/desk-frame';
+import { DeskTable } from '@/features/review/components/desk-table';
+import { parseDeskQuery, tabsFor } from '@/features/review/model/desk-query';
+import { DeskGate } from './desk-gate';
 
 export function ReviewDeskPage() {
   return (
-    <>
-      <PageHeader title="Review desk" subtitle="Merged records of the day and the season" />
-      <RoleGate allowed={canUseReviewDesk} who="supervisors and admins">
-        <EmptyState title="Nothing to review yet">
-          Checks, trips, defects and incident notes from the club's devices show here once they have synced, to be
-          read, signed off, and any conflicts between devices settled.
-        </EmptyState>
-      </RoleGate>
-    </>
+    <DeskGate title="Review desk" allowed={canUseReviewDesk} who="supervisors and admins">
+      <Tables />
+    </DeskGate>
+  );
+}
+
+function Tables() {
+  const { activeClub } = useSession();
+  const [search] = useSearchParams();
+  const { tab } = parseDeskQuery(search, tabsFor(activeClub.role));
+  return (
+    <DeskFrame screen={tab}>
+      <DeskTable key={tab} />
+    </DeskFrame>
   );
 }

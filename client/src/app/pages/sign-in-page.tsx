@@ -2,10 +2,11 @@ import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
 import Paper from '@mui/material/Paper';
 import Typography from '@mui/material/Typography';
-import { Navigate, useNavigate, useSearchParams } from 'react-router-dom';
+import Link from '@mui/material/Link';
+import { Link as RouterLink, Navigate, useNavigate, useSearchParams } from 'react-router-dom';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
 import { useAuthState } from '@/features/auth/use-auth';
-import { safeNextPath } from '../paths';
+import { paths, safeNextPath } from '../paths';
 
 export function SignInPage() {
   const { session, notice } = useAuthState();
@@ -33,7 +34,11 @@ export function SignInPage() {
         )}
         <SignInForm onSignedIn={() => navigate(next, { replace: true })} />
         <Typography variant="body2" color="text.secondary" sx={{ mt: 3 }}>
-          Forgotten your password? Ask your club admin to send you a new invitation.
+          Forgotten your password?{' '}
+          <Link component={RouterLink} to={paths.forgotPassword.href()}>
+            E-mail me a link to choose a new one
+          </Link>
+          .
         </Typography>
       </Paper>
     </Box>

@@ -1,6 +1,8 @@
 import type { ComponentType } from 'react';
 import AdminPanelSettingsOutlined from '@mui/icons-material/AdminPanelSettingsOutlined';
 import FactCheckOutlined from '@mui/icons-material/FactCheckOutlined';
+import InsightsOutlined from '@mui/icons-material/InsightsOutlined';
+import WorkspacePremiumOutlined from '@mui/icons-material/WorkspacePremiumOutlined';
 import MoreHorizOutlined from '@mui/icons-material/MoreHorizOutlined';
 import RateReviewOutlined from '@mui/icons-material/RateReviewOutlined';
 import ReportProblemOutlined from '@mui/icons-material/ReportProblemOutlined';
@@ -27,6 +29,8 @@ export const navItems: readonly NavItem[] = [
   { route: 'defects', label: 'Defects', Icon: ReportProblemOutlined },
   { route: 'more', label: 'More', Icon: MoreHorizOutlined },
   { route: 'reviewDesk', label: 'Review desk', Icon: RateReviewOutlined, desktopOnly: true, allowed: canUseReviewDesk },
+  { route: 'seasonReport', label: 'Season report', Icon: InsightsOutlined, desktopOnly: true, allowed: canUseReviewDesk },
+  { route: 'crewAwards', label: 'Crew awards', Icon: WorkspacePremiumOutlined, desktopOnly: true, allowed: canUseReviewDesk },
   { route: 'admin', label: 'Admin', Icon: AdminPanelSettingsOutlined, desktopOnly: true, allowed: canAdminister },
 ];
 

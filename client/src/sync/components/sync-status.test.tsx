@@ -2,6 +2,7 @@ import { act, render, screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it } from 'vitest';
 import { closeReplicas, openReplica } from '@/db/open';
+import { savePhoto } from '@/db/photos';
 import { createRecord, updateRecord } from '@/db/write';
 import { tokenStore } from '@/features/auth/token-store';
 import { sessionAnswer } from '@/test/fixtures';
@@ -82,6 +83,27 @@ describe('sync status', () => {
     expect(screen.getByText(/^1 conflict waiting for a supervisor/)).toBeInTheDocument();
     await user.click(within(refused.closest('[role="alert"]') as HTMLElement).getByRole('button', { name: 'Dismiss' }));
     await waitFor(() => expect(screen.queryByText(/was not saved/)).toBeNull());
+  });
+
+  it('shows a refused photo with the reason, and sends it when the person tries again', async () => {
+    const { backend, runner, writer } = setUp();
+    // Starts like a JPEG (FF D8 FF E0); bigger than the limit set below.
+    const bytes = new Uint8Array(300).fill(7);
+    bytes.set([0xff, 0xd8, 0xff, 0xe0]);
+    const sha = await savePhoto(writer.db, 'c-1', bytes.buffer, 'image/jpeg');
+    await createRecord(writer, 'defect', defectFields({ photos: [sha] }));
+    backend.photoLimitBytes = 100;
+    render(<SyncStatus runner={runner} />);
+    await act(() => runner.idle());
+    const user = userEvent.setup();
+    await user.click(await screen.findByRole('button', { name: /^Sync: Last synced/ }));
+    const alert = (await screen.findByText(/^A photo was not sent\. The photo is larger than the 100 bytes/)).closest('[role="alert"]') as HTMLElement;
+    expect(alert).toHaveTextContent('It stays on this phone.');
+    backend.photoLimitBytes = 10_000;
+    await user.click(within(alert).getByRole('button', { name: 'Try again' }));
+    await waitFor(() => expect(backend.photos.has(`c-1/${sha}`)).toBe(true));
+    await act(() => runner.idle());
+    expect(screen.queryByText(/A photo was not sent/)).toBeNull();
   });
 
   it('says what a refused persistent-storage request means', async () => {

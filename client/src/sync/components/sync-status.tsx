@@ -18,14 +18,14 @@ import { useReplica } from '@/db/hooks';
 import { syncRunner } from '../index';
 import { STORAGE_NOT_PERSISTED } from '../persist';
 import type { SyncRunner } from '../runner';
-import { dismissRejected, useSyncStatus, type SyncStatus as Status } from '../status';
-import { conflictsText, headline, lastSyncText, progressText, rejectedTitle, waitingText } from '../status-text';
+import { dismissRejected, retryPhoto, useSyncStatus, type SyncStatus as Status } from '../status';
+import { conflictsText, headline, lastSyncText, photosWaitingText, progressText, rejectedTitle, waitingText } from '../status-text';
 
 function StatusIcon({ s }: { s: Status }) {
   if (s.running) return <SyncOutlined />;
   if (s.lastError?.reason === 'offline') return <CloudOffOutlined />;
   if (s.lastError) return <SyncProblemOutlined />;
-  return s.waiting > 0 ? <CloudUploadOutlined /> : <CloudDoneOutlined />;
+  return s.waiting + s.photosWaiting > 0 ? <CloudUploadOutlined /> : <CloudDoneOutlined />;
 }
 
 /** Refreshes "5 minutes ago" while the status is on screen. */
@@ -48,10 +48,11 @@ export function SyncStatus({ runner = syncRunner }: { runner?: SyncRunner }) {
   if (!s) return null;
   const summary = headline(s, now);
   const conflicts = conflictsText(s.openConflicts);
+  const photos = photosWaitingText(s.photosWaiting);
   return (
     <>
       <IconButton color="inherit" aria-label={`Sync: ${summary}`} onClick={() => setOpen(true)}>
-        <Badge badgeContent={s.waiting} color="secondary" max={999}>
+        <Badge badgeContent={s.waiting + s.photosWaiting} color="secondary" max={999}>
           <StatusIcon s={s} />
         </Badge>
       </IconButton>
@@ -60,6 +61,7 @@ export function SyncStatus({ runner = syncRunner }: { runner?: SyncRunner }) {
         <DialogContent>
           <Stack spacing={1.5}>
             <Typography>{waitingText(s.waiting)}</Typography>
+            {photos && <Typography>{photos}</Typography>}
             <Typography>{lastSyncText(s.lastSyncAt, now)}</Typography>
             {progressText(s) && <Typography role="status">{progressText(s)}</Typography>}
             {s.lastError && <Alert severity={s.lastError.reason === 'offline' ? 'info' : 'warning'}>{s.lastError.message}</Alert>}
@@ -71,6 +73,15 @@ export function SyncStatus({ runner = syncRunner }: { runner?: SyncRunner }) {
                 action={<Button color="inherit" size="small" onClick={() => void dismissRejected(db, r.mutationId)}>Dismiss</Button>}
               >
                 {rejectedTitle(r)} {r.error.message}
+              </Alert>
+            ))}
+            {s.refusedPhotos.map((p) => (
+              <Alert
+                key={p.sha256}
+                severity="error"
+                action={<Button color="inherit" size="small" onClick={() => void retryPhoto(db, p.sha256).then(() => runner.requestSync())}>Try again</Button>}
+              >
+                A photo was not sent. {p.problem} It stays on this phone.
               </Alert>
             ))}
             {s.storage === 'refused' && <Alert severity="warning">{STORAGE_NOT_PERSISTED}</Alert>}

@@ -36,6 +36,14 @@ export class FakeBackend {
   offline = false;
   inFlight = 0;
   maxInFlight = 0;
+  /** Photos the server keeps, by club and hash, as the attachment routes store them. */
+  readonly photos = new Map<string, { bytes: Uint8Array<ArrayBuffer>; type: string }>();
+  /** The photo store answers 503 while set. */
+  photoStoreDown = false;
+  /** The next photo upload is stored but its answer never reaches the phone. */
+  loseNextPhotoAnswer = false;
+  /** The upload size limit (413 above it). */
+  photoLimitBytes = 10 * 1024 * 1024;
   /** Other routes (e.g. the auth refresh) answered as given. */
   readonly routes: Record<string, () => Response> = {};
   private readonly tokens = new Map<string, AuthContext>();
@@ -82,13 +90,64 @@ export class FakeBackend {
         if (this.outdated) throw new SyncRequestError(426, 'This app is out of date. It will update itself; then sync again.');
         return json(200, this.server.pull(auth, Object.fromEntries(url.searchParams)));
       }
+      const photo = /^\/api\/attachments\/([0-9a-f]{64})$/.exec(url.pathname);
+      if (photo) return await this.attachment(method, `${auth.clubId}/${photo[1]}`, photo[1]!, init);
       if (method === 'GET' && url.pathname === '/api/sync/status') {
         return json(200, { openConflicts: this.server.conflicts(auth.clubId).filter((c) => c.status === 'open').length });
       }
       return json(404, { statusCode: 404, code: 'not_found', message: `No route ${method} ${url.pathname}.` });
     } catch (e) {
+      if (e instanceof PhotoRefusal) return json(e.status, { statusCode: e.status, code: e.code, message: e.message });
       if (!(e instanceof SyncRequestError)) throw e;
       return json(e.httpStatus, { statusCode: e.httpStatus, code: CODES[e.httpStatus] ?? 'validation_failed', message: e.message });
     }
   }
+
+  /** The attachment routes' rules: content-addressed, hash checked, type sniffed, size limited. */
+  private async attachment(method: string, key: string, sha256: string, init: RequestInit): Promise<Response> {
+    if (this.photoStoreDown) throw new PhotoRefusal(503, 'storage_unavailable', 'The photo store cannot be reached just now. Try again in a few minutes.');
+    const held = this.photos.get(key);
+    if (method === 'HEAD' || method === 'GET') {
+      if (!held) return method === 'HEAD' ? new Response(null, { status: 404 }) : json(404, { statusCode: 404, code: 'not_found', message: `Your club has no photo ${sha256}.` });
+      const headers = { 'Content-Type': held.type, 'Content-Length': String(held.bytes.byteLength) };
+      return new Response(method === 'HEAD' ? null : held.bytes.slice(), { status: 200, headers });
+    }
+    if (method !== 'PUT' || !(init.body instanceof FormData)) return json(400, { statusCode: 400, code: 'validation_failed', message: 'Send the photo as multipart/form-data.' });
+    const file = init.body.get('file');
+    if (!(file instanceof Blob)) return json(400, { statusCode: 400, code: 'validation_failed', message: 'No photo came with the request.' });
+    const bytes = new Uint8Array(await readBlob(file));
+    if (bytes.byteLength > this.photoLimitBytes) throw new PhotoRefusal(413, 'payload_too_large', `The photo is larger than the ${this.photoLimitBytes} bytes the server accepts.`);
+    if ((await hex(bytes)) !== sha256) throw new PhotoRefusal(400, 'validation_failed', 'The photo does not match its hash.');
+    const type = bytes[0] === 0xff && bytes[1] === 0xd8 && bytes[2] === 0xff ? 'image/jpeg' : null;
+    if (!type) throw new PhotoRefusal(415, 'unsupported_media_type', 'This file is not a photo the server accepts: send a JPEG image.');
+    if (held) return json(200, { sha256, size: held.bytes.byteLength, type, existed: true });
+    this.photos.set(key, { bytes, type });
+    if (this.loseNextPhotoAnswer) {
+      this.loseNextPhotoAnswer = false;
+      throw new TypeError('Failed to fetch'); // stored on the server, never heard by the phone
+    }
+    return json(201, { sha256, size: bytes.byteLength, type, existed: false });
+  }
+}
+
+class PhotoRefusal extends Error {
+  constructor(readonly status: number, readonly code: string, message: string) {
+    super(message);
+  }
+}
+
+/** jsdom's Blob may lack arrayBuffer(); FileReader is there in every realm the tests use. */
+function readBlob(blob: Blob): Promise<ArrayBuffer> {
+  if (typeof blob.arrayBuffer === 'function') return blob.arrayBuffer();
+  return new Promise((resolve, reject) => {
+    const reader = new FileReader();
+    reader.onload = () => resolve(reader.result as ArrayBuffer);
+    reader.onerror = () => reject(reader.error);
+    reader.readAsArrayBuffer(blob);
+  });
+}
+
+async function hex(bytes: Uint8Array<ArrayBuffer>): Promise<string> {
+  const digest = new Uint8Array(await crypto.subtle.digest('SHA-256', bytes));
+  return Array.from(digest, (b) => b.toString(16).padStart(2, '0')).join('');
 }

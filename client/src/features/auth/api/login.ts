@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import { noteSignedIn } from '../members/device';
 import { tokenStore } from '../token-store';
 import { parseSessionAnswer } from './parse';
 import type { SessionAnswer } from './types';
@@ -23,6 +24,7 @@ export function useLogin() {
     onSuccess: (answer) => {
       queryClient.clear();
       tokenStore.saveSession(answer);
+      noteSignedIn(answer);
     },
   });
 }

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import { roster } from '../members/roster';
 import { tokenStore } from '../token-store';
 
 export async function logout(refreshToken: string): Promise<void> {
@@ -14,8 +15,11 @@ export function useSignOut() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async () => {
-      const refreshToken = tokenStore.getState().session?.refreshToken;
+      const session = tokenStore.getState().session;
+      const refreshToken = session?.refreshToken;
       tokenStore.clear();
+      // Signed out is off this device: switching back needs the password, not the PIN.
+      if (session) roster.update(session.user.id, () => null);
       queryClient.clear();
       if (!refreshToken) return;
       try {

@@ -13,6 +13,13 @@ export interface ActiveClub {
   timeZone: string;
   pressureUnit: string;
   role: Role;
+  /** WGS 84 degrees of the patrolled beach; absent in a session saved by an older app. */
+  latitude?: number;
+  longitude?: number;
+  /** The unit wind speeds are typed in: kn, km/h or m/s. */
+  windUnit?: string;
+  /** Sign-on without a current award: 'warn' or 'block'. */
+  awardCheck?: string;
 }
 
 export interface Membership {

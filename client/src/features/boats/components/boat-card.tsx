@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import Box from '@mui/material/Box';
 import Card from '@mui/material/Card';
 import CardActionArea from '@mui/material/CardActionArea';
@@ -15,7 +16,12 @@ import { ReasonList } from './reason-list';
 const defectWords = (n: number) => (n === 0 ? 'No open defects' : n === 1 ? '1 open defect' : `${n} open defects`);
 
 /** One boat on Today: its state as a word and a mark, why, its open defects, and what to do next. */
-export function BoatCard(props: { boat: LocalRecord<'boat'>; result: BoatReadiness; openDefects: number }) {
+export function BoatCard(props: {
+  boat: LocalRecord<'boat'>; result: BoatReadiness; openDefects: number;
+  /** Another feature's part of the card, below the next action (see TodayBoard). */
+  extra?: (boat: LocalRecord<'boat'>, result: BoatReadiness, boats: readonly LocalRecord<'boat'>[]) => ReactNode;
+  boats?: readonly LocalRecord<'boat'>[];
+}) {
   const { boat, result, openDefects } = props;
   const title = `${boat.fields.fleetNumber} · ${boat.fields.name}`;
   const colour = result.ok ? STATE_META[result.readiness.state].colour : 'error.main';
@@ -46,6 +52,7 @@ export function BoatCard(props: { boat: LocalRecord<'boat'>; result: BoatReadine
           <NextActionBar boatId={boat.id} readiness={result.readiness} />
         </Box>
       )}
+      {props.extra && <Box sx={{ px: 2, pb: 2 }}>{props.extra(boat, result, props.boats ?? [boat])}</Box>}
     </Card>
   );
 }

@@ -1,5 +1,8 @@
 import Box from '@mui/material/Box';
+import Button from '@mui/material/Button';
 import Typography from '@mui/material/Typography';
+import { Link as RouterLink } from 'react-router-dom';
+import { paths } from '@/app/paths';
 import type { LocalRecord } from '@/db/types';
 import { motorService, motorUsage } from '../readiness/motor-input';
 import type { ReadinessContext } from '../readiness/adapt';
@@ -26,6 +29,9 @@ export function MotorSummary(props: { motor: LocalRecord<'motor'>; trips: readon
         {SERVICE_WORDS[service.status]}
       </Typography>
       <Typography variant="body2">{service.reason.charAt(0).toUpperCase() + service.reason.slice(1)}.</Typography>
+      <Button component={RouterLink} to={paths.motorEdit.href(motor.id)} sx={{ mt: 1, minHeight: 48 }}>
+        Motor record and its moves
+      </Button>
     </Box>
   );
 }

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import CircularProgress from '@mui/material/CircularProgress';
@@ -6,15 +7,19 @@ import { roleAtLeast } from '@breakline/sync-protocol';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/app/paths';
 import { EmptyState } from '@/components/empty-state';
+import type { LocalRecord } from '@/db/types';
 import { useSession } from '@/features/auth/use-auth';
 import { useFleetRecords } from '../hooks/use-fleet-records';
 import { useReadinessContext } from '../hooks/use-readiness-context';
-import { readinessOf } from '../readiness/adapt';
+import { readinessOf, type BoatReadiness } from '../readiness/adapt';
 import { openDefectsOf } from '../readiness/open-defects';
 import { BoatCard } from './boat-card';
 
-/** Today's board: every boat in service with its state, worked out on this phone. */
-export function TodayBoard() {
+/**
+ * Today's board: every boat in service with its state, worked out on this phone. `boatExtra` is
+ * another feature's part for each boat's card (who is signed on, the trip afloat), placed by the page.
+ */
+export function TodayBoard({ boatExtra }: { boatExtra?: (boat: LocalRecord<'boat'>, result: BoatReadiness, boats: readonly LocalRecord<'boat'>[]) => ReactNode } = {}) {
   const fleet = useFleetRecords();
   const ctx = useReadinessContext();
   const { activeClub } = useSession();
@@ -31,7 +36,7 @@ export function TodayBoard() {
         </EmptyState>
       )}
       {boats.map((boat) => (
-        <BoatCard key={boat.id} boat={boat} result={readinessOf(boat, fleet, ctx)} openDefects={openDefectsOf(fleet.defects, boat.id).length} />
+        <BoatCard key={boat.id} boat={boat} result={readinessOf(boat, fleet, ctx)} openDefects={openDefectsOf(fleet.defects, boat.id).length} extra={boatExtra} boats={boats} />
       ))}
       {away > 0 && (
         <Typography sx={{ color: 'text.secondary' }}>

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import Box from '@mui/material/Box';
 import CircularProgress from '@mui/material/CircularProgress';
 import { kindSpec, roleAtLeast } from '@breakline/sync-protocol';
@@ -11,7 +12,8 @@ import { motorDraftOf, newMotorDraft } from './motor-draft';
 import { MotorForm } from './motor-form';
 import { ReadOnlyNote } from './read-only-note';
 
-export function MotorEditor({ motorId }: { motorId: string }) {
+/** A motor's page: its record (editable by supervisors and admins) and, below, `history`. */
+export function MotorEditor({ motorId, history }: { motorId: string; history?: ReactNode }) {
   const isNew = motorId === 'new';
   const motor = useRecord('motor', isNew ? undefined : motorId);
   const { activeClub } = useSession();
@@ -27,6 +29,7 @@ export function MotorEditor({ motorId }: { motorId: string }) {
       <PageHeader title={motor ? `Motor ${motor.fields.serial}` : 'New motor'} subtitle="Motor specification and service" />
       {!editable && <ReadOnlyNote what="this motor's record" />}
       <MotorForm key={motor?.id ?? 'new'} motorId={motor?.id ?? null} fittedTo={motor?.fields.boatId ?? null} initial={initial} editable={editable} onSaved={() => navigate(paths.fleet.href())} />
+      {motor && history}
     </Box>
   );
 }

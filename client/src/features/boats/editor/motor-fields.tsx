@@ -43,6 +43,7 @@ export function MotorFields({ draft, errors, boats, set }: Props) {
       {draft.fuelMode === 'premix' && box('premixRatio', 'Premix ratio, petrol to oil (e.g. 50 for 50:1, from the manual)', 'decimal')}
       <TextField select label="Fitted to" value={draft.boatId} onChange={(e) => set({ boatId: e.target.value })}>
         <MenuItem value="">Not fitted (in the store)</MenuItem>
+        {draft.boatId && !boats.some((b) => b.id === draft.boatId) && <MenuItem value={draft.boatId}>A boat not on this phone</MenuItem>}
         {boats.map((b) => (
           <MenuItem key={b.id} value={b.id}>
             {b.fields.fleetNumber} · {b.fields.name}

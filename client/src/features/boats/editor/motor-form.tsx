@@ -2,9 +2,10 @@ import { useState } from 'react';
 import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
+import TextField from '@mui/material/TextField';
 import { useRecords, useReplica } from '@/db/hooks';
-import { createRecord, updateRecord } from '@/db/write';
 import { useSession } from '@/features/auth/use-auth';
+import { saveMotor } from '../moves/save-motor';
 import type { DraftErrors } from './boat-draft';
 import { buildMotor, type MotorDraft } from './motor-draft';
 import { MotorFields } from './motor-fields';
@@ -25,25 +26,31 @@ export function MotorForm({ motorId, fittedTo, initial, editable, onSaved }: Pro
   const boats = useRecords('boat') ?? [];
   const [draft, setDraft] = useState(initial);
   const [errors, setErrors] = useState<DraftErrors>({});
+  const [reason, setReason] = useState('');
   const { refusal, saving, run } = useLocalSave();
+  const moving = (draft.boatId || null) !== fittedTo;
   async function save() {
     const built = buildMotor(draft, activeClub.timeZone);
     setErrors(built.ok ? {} : built.errors);
     if (!built.ok) return;
+    // The move is history of its own, so the motor's page can say where it has been.
     const ok = await run(async () => {
-      const id = motorId ?? (await createRecord(ctx, 'motor', built.fields));
-      if (motorId) await updateRecord(ctx, 'motor', motorId, built.fields);
-      // The move is history of its own, so the boat file can say where a motor has been.
-      if (built.fields.boatId !== fittedTo) {
-        const movedAt = new Date().toISOString();
-        await createRecord(ctx, 'motorMove', { motorId: id, fromBoatId: fittedTo, toBoatId: built.fields.boatId, movedAt, reason: '' });
-      }
+      await saveMotor(ctx, { motorId, fields: built.fields, fittedTo, reason });
     });
     if (ok) onSaved();
   }
   return (
     <Box component="fieldset" disabled={!editable} sx={{ border: 0, p: 0, m: 0, display: 'grid', gap: 2 }}>
       <MotorFields draft={draft} errors={errors} boats={boats} set={(c) => setDraft((d) => ({ ...d, ...c }))} />
+      {moving && (
+        <TextField
+          label="Why is it moving? (kept in the motor's history)"
+          value={reason}
+          onChange={(e) => setReason(e.target.value)}
+          helperText="Optional, e.g. off for a service, stand-in for another motor"
+          slotProps={{ htmlInput: { maxLength: 500 } }}
+        />
+      )}
       {Object.keys(errors).length > 0 && <Alert severity="error">Some boxes need fixing before the motor is saved.</Alert>}
       {refusal && <Alert severity="error">{refusal}</Alert>}
       {editable && (

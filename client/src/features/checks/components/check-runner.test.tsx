@@ -60,7 +60,8 @@ describe('the check runner', () => {
     await waitFor(async () => expect(await listRecords(p.ctx.db, p.ctx.clubId, 'defect')).toHaveLength(1));
     const [defect] = await listRecords(p.ctx.db, p.ctx.clubId, 'defect');
     expect(defect!.fields).toMatchObject({ boatId, checkId, itemId: 'pressure-port', severity: 'stand-down', status: 'open', description: 'Port side pontoon pressure: failed' });
-    expect(await waitFor(() => item(port).getByRole('link', { name: 'Defect reported: open it' }))).toBeInTheDocument();
+    expect(await waitFor(() => item(port).getByRole('link', { name: 'Open the defect' }))).toBeInTheDocument();
+    expect(item(port).getByText('Defect reported: stand-down, no photo, saved on this phone.')).toBeInTheDocument();
   });
 
   it('offers a limit defect for a failed minor item', async () => {
@@ -99,16 +100,19 @@ describe('the check runner', () => {
 
     const all = DEFAULT_LAUNCH_TEMPLATE.sections.flatMap((s) => s.items);
     await updateRecord(p.ctx, 'check', checkId, { results: Object.fromEntries(all.map((i) => [i.id, { outcome: 'na' as const }])) });
-    await user.click(await screen.findByRole('button', { name: 'Finish launch check' }));
+    // The button turns on when the answers written above reach the screen.
+    const finish = await screen.findByRole('button', { name: 'Finish launch check' });
+    await waitFor(() => expect(finish).toBeEnabled());
+    await user.click(finish);
     expect(await screen.findByRole('heading', { name: 'Launch check complete' })).toBeInTheDocument();
     expect((await stored())!.fields).toMatchObject({ status: 'complete', completedAt: expect.any(String) });
   });
 });
 
 describe('starting a check without templates', () => {
-  it('lets a supervisor set up the defaults', async () => {
+  it('lets an admin set up the defaults', async () => {
     setViewportWidth(PHONE_WIDTH);
-    const p = testPerson('supervisor');
+    const p = testPerson('admin');
     mockApi({ 'GET /api/auth/me': p.me });
     const boatId = await seedBoatAndTemplates(p.seed, false);
     const user = userEvent.setup();
@@ -118,13 +122,13 @@ describe('starting a check without templates', () => {
     expect(await listRecords(p.ctx.db, p.ctx.clubId, 'checkTemplate')).toHaveLength(2);
   });
 
-  it('tells crew to ask a supervisor', async () => {
+  it('tells crew to ask an admin', async () => {
     setViewportWidth(PHONE_WIDTH);
     const p = testPerson('crew');
     mockApi({ 'GET /api/auth/me': p.me });
     const boatId = await seedBoatAndTemplates(p.seed, false);
     renderApp(`/checks/start?type=launch&boat=${boatId}`, p.session);
-    expect(await screen.findByText(/Ask a supervisor to set them up/)).toBeInTheDocument();
+    expect(await screen.findByText(/Ask an admin to set them up/)).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Start launch check/ })).toBeNull();
   });
 });

@@ -9,10 +9,16 @@ import { parsePressureEntry, pressureEntryText } from '@/lib/pressure-entry';
 import { pressureEntry } from '../model/answers';
 import type { ItemProps } from './item-props';
 import { OutcomeButtons } from './outcome-buttons';
+import { PlainReadingItem } from './plain-reading-item';
 import { PressureStatus } from './pressure-status';
 
+/** A reading: an air chamber's pressure, or a value in the item's own unit. */
+export function ReadingItem(props: ItemProps) {
+  return props.item.chamberId ? <PressureReadingItem {...props} /> : <PlainReadingItem {...props} />;
+}
+
 /** A chamber pressure typed in the club's unit and kept in kPa, judged against the boat's range. */
-export function ReadingItem({ item, entry, unit, chamber, readOnly, save }: ItemProps) {
+function PressureReadingItem({ item, entry, unit, chamber, readOnly, save }: ItemProps) {
   const [text, setText] = useState(typeof entry?.value === 'number' ? pressureEntryText(entry.value, unit) : '');
   const [problem, setProblem] = useState<string | null>(null);
   const parsed = text.trim() ? parsePressureEntry(text, unit) : null;

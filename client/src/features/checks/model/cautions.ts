@@ -7,12 +7,17 @@ import type { TemplateSection } from './types';
  */
 export function sectionCautions(type: 'launch' | 'stow', section: TemplateSection): string[] {
   const own = section.items.flatMap((i) => (i.caution ? [i.caution] : []));
-  const system = section.system.toLowerCase();
+  return [...new Set([...own, ...usualCautions(type, section.system)])];
+}
+
+/** The reminders a screen of this system always shows, whatever its items say. */
+export function usualCautions(type: 'launch' | 'stow', system: string): string[] {
+  const s = system.trim().toLowerCase();
   const usual: string[] = [];
-  if (system === 'motor') usual.push(type === 'launch' ? CAUTIONS.testRun : CAUTIONS.flush);
-  if (system === 'motor' && type === 'stow') usual.push(FLUSH_TIME);
-  if (system === 'fuel') usual.push(CAUTIONS.fuel);
-  return [...new Set([...own, ...usual])];
+  if (s === 'motor') usual.push(type === 'launch' ? CAUTIONS.testRun : CAUTIONS.flush);
+  if (s === 'motor' && type === 'stow') usual.push(FLUSH_TIME);
+  if (s === 'fuel') usual.push(CAUTIONS.fuel);
+  return usual;
 }
 
 // Common practice, no source: the motor's manual gives the figure for that motor.

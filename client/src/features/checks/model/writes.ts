@@ -46,7 +46,7 @@ export function startCheck(
   });
 }
 
-/** The default launch and stow templates for a club that has none (a supervisor's write). */
+/** The default launch and stow templates for a club that has none (an admin's write). */
 export async function createDefaultTemplates(ctx: WriteContext, missing: readonly ('launch' | 'stow')[]): Promise<void> {
   for (const type of missing) await createRecord(ctx, 'checkTemplate', type === 'launch' ? DEFAULT_LAUNCH_TEMPLATE : DEFAULT_STOW_TEMPLATE);
 }

@@ -37,6 +37,6 @@ describe('reporting a defect on its own', () => {
     const [defect] = await listRecords(p.ctx.db, p.ctx.clubId, 'defect');
     const [photo] = await p.ctx.db.photos.toArray();
     expect(defect!.fields).toMatchObject({ boatId, severity: 'limit', status: 'open', reportedBy: p.ctx.userId, photos: [photo!.sha256] });
-    expect(photo).toMatchObject({ type: 'image/png', uploaded: 0 });
+    expect(photo).toMatchObject({ type: 'image/png', state: 'kept' });
   }, 30_000);
 });

@@ -1,16 +1,19 @@
 import { useState } from 'react';
 import Alert from '@mui/material/Alert';
+import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import Dialog from '@mui/material/Dialog';
 import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogTitle from '@mui/material/DialogTitle';
 import TextField from '@mui/material/TextField';
+import Typography from '@mui/material/Typography';
 import type { DefectSeverity } from '@breakline/sync-protocol';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/app/paths';
 import { useRecords, useReplica } from '@/db/hooks';
 import { useLocalSave } from '@/lib/use-local-save';
+import { SEVERITY_META } from '../model/words';
 import { raiseDefect } from '../model/writes';
 import { usePhotoTaker } from './photo-picker';
 import { SeverityPicker } from './severity-picker';
@@ -40,7 +43,18 @@ export function QuickDefect(p: QuickDefectProps) {
     run(() => raiseDefect(ctx, { boatId: p.boatId, motorId: p.motorId, checkId: p.checkId, itemId: p.itemId, severity, description, photos }).then(() => undefined)).then((ok) => ok && setOpen(false));
   const camera = usePhotoTaker((sha) => void save([sha]));
   if (reported) {
-    return <Button component={RouterLink} to={paths.defectFile.href(reported.id)} color="error">Defect reported: open it</Button>;
+    const f = reported.fields;
+    const photos = f.photos.length === 0 ? 'no photo' : f.photos.length === 1 ? '1 photo' : `${f.photos.length} photos`;
+    return (
+      <Box sx={{ display: 'grid', gap: 1 }}>
+        <Typography role="status" sx={{ fontWeight: 700 }}>
+          Defect reported: {SEVERITY_META[f.severity].word.toLowerCase()}, {photos}{reported.waiting ? ', saved on this phone' : ''}.
+        </Typography>
+        <Button component={RouterLink} to={paths.defectFile.href(reported.id)} variant="outlined" color="error" size="large" sx={{ minHeight: 56 }}>
+          Open the defect
+        </Button>
+      </Box>
+    );
   }
   return (
     <>
@@ -53,10 +67,11 @@ export function QuickDefect(p: QuickDefectProps) {
           {camera.field}
           {(refusal || camera.problem) && <Alert severity="error">{refusal ?? camera.problem}</Alert>}
         </DialogContent>
-        <DialogActions disableSpacing sx={{ display: 'grid', gap: 1, px: 3, pb: 2 }}>
-          <Button variant="contained" color="error" size="large" disabled={saving} onClick={camera.open}>Take a photo and save</Button>
-          <Button variant="outlined" size="large" disabled={saving} onClick={() => void save([])}>Save without a photo</Button>
-          <Button onClick={() => setOpen(false)}>Cancel</Button>
+        {/* Full width at the thumb: the second tap is the camera, and the photo saves the defect. */}
+        <DialogActions disableSpacing sx={{ display: 'grid', gridTemplateColumns: '1fr', gap: 1, px: 3, pb: 2 }}>
+          <Button variant="contained" color="error" size="large" disabled={saving} onClick={camera.open} sx={{ minHeight: 56 }}>Take a photo and save</Button>
+          <Button variant="outlined" size="large" disabled={saving} onClick={() => void save([])} sx={{ minHeight: 56 }}>Save without a photo</Button>
+          <Button size="large" onClick={() => setOpen(false)} sx={{ minHeight: 48 }}>Cancel</Button>
         </DialogActions>
       </Dialog>
     </>
