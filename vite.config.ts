@@ -66,5 +66,7 @@ export default defineConfig(({ mode }) => ({
     setupFiles: [fileURLToPath(new URL('./client/src/test/setup.ts', import.meta.url))],
     unstubGlobals: true,
     restoreMocks: true,
+    // Screen tests type and click like a person; on a 2-core machine under load 5 s is too tight.
+    testTimeout: 20_000,
   },
 }));
