@@ -132,7 +132,7 @@ describe('the Review desk on a desktop', () => {
     // The boat's page on the desk lists every version: the two phones' edits and the settlement.
     await page.goto(`${server.baseUrl}/review/records/boat/${boat}`);
     const versions = page.getByRole('listitem').filter({ hasText: /^Version \d+/ });
-    await expect.poll(() => versions.filter({ hasText: 'a supervisor settled a conflict' }).count(), { timeout: 20_000 }).toBe(1);
+    await expect.poll(() => versions.filter({ hasText: 'a supervisor settled a conflict' }).filter({ hasText: settled }).count(), { timeout: 20_000 }).toBe(1);
     expect(await versions.filter({ hasText: notesA }).count()).toBeGreaterThan(0);
     expect(await versions.filter({ hasText: notesB }).count()).toBeGreaterThan(0);
     await screenshot(page, 'desk-record-versions');

@@ -66,14 +66,17 @@ describe('a failed launch check on a phone with no signal reaches the supervisor
   let server: RunningServer;
   let crew: Browser;
   let supervisor: Browser;
+  let admin: Browser;
   beforeAll(async () => {
     server = await startServer();
     crew = await openBrowser();
     supervisor = await openBrowser(DESKTOP);
+    admin = await openBrowser();
   });
   afterAll(async () => {
     await crew?.close();
     await supervisor?.close();
+    await admin?.close();
     await server?.stop();
   });
 
@@ -163,7 +166,6 @@ describe('a failed launch check on a phone with no signal reaches the supervisor
 
     // The supervisor's desktop fetches and sees the same state and the defect.
     await desk.getByRole('link', { name: 'Today', exact: true }).first().click();
-    expect(await desk.getByRole('article', { name: BOAT }).getByText('Unchecked', { exact: true }).count()).toBe(1);
     await desk.getByRole('button', { name: /^Sync: / }).click();
     await desk.getByRole('button', { name: 'Sync now' }).click();
     await desk.getByRole('button', { name: 'Close' }).click();
@@ -180,5 +182,51 @@ describe('a failed launch check on a phone with no signal reaches the supervisor
     // The photo went up from the phone and comes down to the desk.
     await expect.poll(() => desk.getByRole('img', { name: 'Defect photo' }).count(), { timeout: 30_000 }).toBe(1);
     await screenshot(desk, 'stand-down-8-supervisor-defect');
+  }, 180_000);
+
+  it('lets an admin edit the launch check on a phone; the check already run keeps the version it was run against', async () => {
+    const { page } = admin;
+    await signIn(page, server.baseUrl, 'admin@gannetbay.example', 'Mara Okonkwo-Hale');
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'More', exact: true }).click();
+    await page.getByRole('link', { name: /^Check templates/ }).click();
+    await page.getByRole('link', { name: 'Edit the launch check' }).click();
+    await page.getByRole('heading', { name: 'Launch check template' }).waitFor();
+    await seen(page, 'template-1-editor-phone');
+
+    const hull = page.getByRole('region', { name: 'Section 1: Hull and fittings' });
+    await hull.getByRole('button', { name: 'Edit section 1' }).click();
+    const bungs = hull.getByRole('region', { name: 'Item 2' });
+    await bungs.getByLabel('What to check').fill('Drain bungs in, tight and secured');
+    await bungs.getByRole('button', { name: 'Minor: a failure limits the boat' }).click();
+    await bungs.getByLabel('What to check').fill('');
+    await page.getByRole('button', { name: 'Save as version 2' }).click();
+    const summary = page.getByRole('alert').filter({ hasText: 'Not saved yet' });
+    await summary.waitFor();
+    await seen(page, 'template-2-editor-phone-refused', summary);
+    expect(await summary.innerText()).toContain('Section 1 (Hull and fittings), item 2: Say what to check');
+    // Nothing typed is lost: the minor choice is still set; fix the box and save.
+    expect(await bungs.getByRole('button', { name: 'Minor: a failure limits the boat' }).getAttribute('aria-pressed')).toBe('true');
+    await bungs.getByLabel('What to check').fill('Drain bungs in, tight and secured');
+    await seen(page, 'template-3-editor-phone-item', bungs);
+    await page.getByRole('button', { name: 'Save as version 2' }).click();
+    await page.getByText(/^Saved as version 2\./).waitFor();
+    await seen(page, 'template-4-editor-phone-saved');
+    await allSent(page);
+
+    // On the supervisor's desk: the boat is still stood down by version 1's critical item, in its words.
+    const desk = supervisor.page;
+    await desk.getByRole('button', { name: /^Sync: / }).click();
+    await desk.getByRole('button', { name: 'Sync now' }).click();
+    await desk.getByRole('button', { name: 'Close' }).click();
+    await desk.getByRole('link', { name: 'Today', exact: true }).first().click();
+    const card = desk.getByRole('article', { name: BOAT });
+    await card.getByText('Stood down', { exact: true }).waitFor();
+    expect(await reasons(card)).toMatch(/Stood down: Drain bungs in and secure failed; launch check/);
+    // And the next check starts from version 2, on the crew's phone once it syncs.
+    await desk.goto(`${server.baseUrl}/admin/templates`);
+    const versions = desk.getByRole('list', { name: 'Launch check versions' });
+    await versions.waitFor();
+    expect(await versions.getByRole('listitem').first().innerText()).toMatch(/^Version 2 \(in use\)/);
+    await screenshot(desk, 'template-5-versions-desk');
   }, 180_000);
 });

@@ -15,4 +15,4 @@ createRoot(container).render(
     <App />
   </StrictMode>,
 );
-registerServiceWorker();
+void registerServiceWorker();

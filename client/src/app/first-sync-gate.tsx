@@ -1,6 +1,6 @@
 import { useSyncExternalStore, type ReactNode } from 'react';
 import Alert from '@mui/material/Alert';
-import LinearProgress from '@mui/material/LinearProgress';
+import CircularProgress from '@mui/material/CircularProgress';
 import Paper from '@mui/material/Paper';
 import Typography from '@mui/material/Typography';
 import { useLiveQuery } from 'dexie-react-hooks';
@@ -33,7 +33,7 @@ export function FirstSyncGate({ children }: { children: ReactNode }) {
           {received > 0 ? `${received.toLocaleString()} records on this phone so far. ` : ''}
           Boat states show once all of them are here, so no boat is shown without its defects and checks.
         </Typography>
-        <LinearProgress aria-label="Getting the club's records" />
+        <CircularProgress aria-label="Getting the club's records" />
       </Paper>
     );
   }

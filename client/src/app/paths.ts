@@ -10,6 +10,12 @@ export const paths = {
     /** `next`: where to go after signing in (an in-app path). */
     href: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
   },
+  /** A shared device's members: switch with a PIN. `next`: where to go after switching. */
+  members: {
+    path: '/members',
+    href: (next?: string) => (next && next !== '/' ? `/members?next=${encodeURIComponent(next)}` : '/members'),
+  },
+  memberAdd: { path: '/members/add', href: () => '/members/add' },
   /** Pages opened from e-mailed links; the token follows `#token=`. */
   acceptInvite: { path: '/accept-invite', href: () => '/accept-invite' },
   resetPassword: { path: '/reset-password', href: () => '/reset-password' },

@@ -1,4 +1,4 @@
-import { Workbox } from 'workbox-window';
+import type { Workbox } from 'workbox-window';
 
 /** A waiting service worker: calling `apply` activates it and reloads the page. */
 export interface PendingUpdate {
@@ -27,8 +27,10 @@ let workbox: Workbox | null = null;
  * Registers /sw.js (built by vite-plugin-pwa in prompt mode). A new worker waits until the person
  * chooses to reload, so a check half filled in is never reloaded away under them.
  */
-export function registerServiceWorker(): void {
+export async function registerServiceWorker(): Promise<void> {
   if (!import.meta.env.PROD || !('serviceWorker' in navigator)) return;
+  // Loaded after the first screen: nothing on it waits for the worker.
+  const { Workbox } = await import('workbox-window');
   const wb = new Workbox('/sw.js', { scope: '/' });
   wb.addEventListener('waiting', () => {
     pwaUpdates.announce({

@@ -1,12 +1,17 @@
+import { lazy, Suspense } from 'react';
 import { createBrowserRouter, type RouteObject } from 'react-router-dom';
-import { SignInPage } from './pages/sign-in-page';
-import { TodayPage } from './pages/today-page';
 import { paths } from './paths';
 import { RequireAuth } from './require-auth';
-import { AppShell } from './shell/app-shell';
 
-// Only Today and sign-in load with the app; every other screen loads on demand (the service
-// worker precaches every chunk, so on demand works with no signal too).
+// The entry holds the frame every route needs; the signed-in shell with Today is one chunk
+// (asked for only once someone is signed in), every other screen, sign-in too, another (the
+// service worker precaches every chunk, so on demand works with no signal too).
+const signedIn = () => import('./signed-in');
+const AppShell = lazy(() => signedIn().then((m) => ({ default: m.AppShell })));
+const TodayPage = lazy(() => signedIn().then((m) => ({ default: m.TodayPage })));
+const signIn = async () => ({ Component: (await import('./pages/sign-in-page')).SignInPage });
+const members = async () => ({ Component: (await import('./pages/members-page')).MembersPage });
+const memberAdd = async () => ({ Component: (await import('./pages/member-add-page')).MemberAddPage });
 const checks = async () => ({ Component: (await import('./pages/checks-page')).ChecksPage });
 const trips = async () => ({ Component: (await import('./pages/trips-page')).TripsPage });
 const defects = async () => ({ Component: (await import('./pages/defects-page')).DefectsPage });
@@ -38,7 +43,9 @@ const templates = async () => ({ Component: (await import('./pages/templates-pag
 const templateEdit = async () => ({ Component: (await import('./pages/template-edit-page')).TemplateEditPage });
 
 export const routes: RouteObject[] = [
-  { path: paths.signIn.path, element: <SignInPage /> },
+  { path: paths.signIn.path, lazy: signIn },
+  { path: paths.members.path, lazy: members },
+  { path: paths.memberAdd.path, lazy: memberAdd },
   { path: paths.acceptInvite.path, lazy: accountLink('AcceptInvitePage') },
   { path: paths.resetPassword.path, lazy: accountLink('ResetPasswordPage') },
   { path: paths.forgotPassword.path, lazy: accountLink('ForgotPasswordPage') },
@@ -46,11 +53,13 @@ export const routes: RouteObject[] = [
     path: paths.today.path,
     element: (
       <RequireAuth>
-        <AppShell />
+        <Suspense fallback={null}>
+          <AppShell />
+        </Suspense>
       </RequireAuth>
     ),
     children: [
-      { index: true, element: <TodayPage /> },
+      { index: true, element: <TodayPage /> }, // in the shell's chunk, so already loaded
       { path: paths.checks.path, lazy: checks },
       { path: paths.checkStart.path, lazy: checkStart },
       { path: paths.checkRun.path, lazy: checkRun },

@@ -1,5 +1,6 @@
 import type { Actor, RecordKind, Role, StoredRecord, WriteStamp } from '@breakline/sync-protocol';
 import { fieldColumns } from './columns.js';
+import type { InputColumn } from './batch-input.js';
 
 /** A row of a kind table as PostgreSQL returns it (snake_case columns). */
 export type Row = Record<string, unknown>;
@@ -21,15 +22,33 @@ export function rowToRecord(kind: RecordKind, row: Row): StoredRecord {
   };
 }
 
-/** Record → the JSON object `json_to_recordset` turns into a row. */
-export function recordToRow(kind: RecordKind, r: StoredRecord): Row {
-  const row: Row = {
-    id: r.id, club_id: r.clubId, version: r.version, hlc: r.hlc, updated_at: r.updatedAt,
-    updated_by: r.lastActor.userId, updated_role: r.lastActor.role ?? null, device_id: r.lastActor.deviceId, deleted: r.deleted,
-    change_seq: r.changeSeq, field_stamps: compactStamps(r),
-  };
-  for (const c of fieldColumns(kind)) row[c.column] = r.fields[c.field] ?? null;
-  return row;
+type Column = InputColumn<StoredRecord>;
+
+/** The sync columns every kind table has; the shareable ones are often one value for a whole batch. */
+const SYNC_COLUMNS: Column[] = [
+  { name: 'id', type: 'uuid', get: (r) => r.id },
+  { name: 'club_id', type: 'uuid', get: (r) => r.clubId, shareable: true },
+  { name: 'version', type: 'int', get: (r) => r.version, shareable: true },
+  { name: 'hlc', type: 'text', get: (r) => r.hlc },
+  { name: 'updated_at', type: 'timestamptz', get: (r) => r.updatedAt, shareable: true },
+  { name: 'updated_by', type: 'uuid', get: (r) => r.lastActor.userId, shareable: true },
+  { name: 'updated_role', type: 'text', get: (r) => r.lastActor.role ?? null, shareable: true },
+  { name: 'device_id', type: 'text', get: (r) => r.lastActor.deviceId, shareable: true },
+  { name: 'deleted', type: 'boolean', get: (r) => r.deleted, shareable: true },
+  { name: 'change_seq', type: 'bigint', get: (r) => r.changeSeq },
+  { name: 'field_stamps', type: 'jsonb', get: (r) => compactStamps(r), whenAbsent: `'{}'::jsonb` },
+];
+
+const columnCache = new Map<RecordKind, Column[]>();
+
+/** Record → the columns of its kind table, for writing records in bulk (see batchInput). */
+export function recordColumns(kind: RecordKind): Column[] {
+  let cols = columnCache.get(kind);
+  if (!cols) {
+    cols = [...SYNC_COLUMNS, ...fieldColumns(kind).map((c): Column => ({ name: c.column, type: c.type, get: (r) => r.fields[c.field] }))];
+    columnCache.set(kind, cols);
+  }
+  return cols;
 }
 
 const sameStamp = (s: WriteStamp, r: StoredRecord) =>
@@ -37,11 +56,15 @@ const sameStamp = (s: WriteStamp, r: StoredRecord) =>
 
 /**
  * Per-field stamps are kept only where they differ from the record's last write, which is most
- * fields after a create: storing all of them made a push write several times the bytes.
+ * fields after a create: storing all of them made a push write several times the bytes. None
+ * left (undefined) is stored as {}.
  */
-function compactStamps(r: StoredRecord): Record<string, WriteStamp> {
-  const out: Record<string, WriteStamp> = {};
-  for (const [f, s] of Object.entries(r.fieldStamps)) if (!sameStamp(s, r)) out[f] = s;
+function compactStamps(r: StoredRecord): Record<string, WriteStamp> | undefined {
+  let out: Record<string, WriteStamp> | undefined;
+  for (const f in r.fieldStamps) {
+    const s = r.fieldStamps[f]!;
+    if (!sameStamp(s, r)) (out ??= {})[f] = s;
+  }
   return out;
 }
 

@@ -1,11 +1,26 @@
 import type { EntityManager } from 'typeorm';
 import type { ConflictRecord, RecordKind, StoredRecord } from '@breakline/sync-protocol';
 import { recordStore } from '../records/record-store.js';
+import { batchInput, type InputColumn } from '../records/batch-input.js';
 
 export interface ChangeEntry {
   seq: number; kind: string; recordId: string; version: number; mutationId: string | null;
   deviceId: string; userId: string; hlc: string; patch: Record<string, unknown>; deleted: boolean; status: string;
 }
+
+const CHANGE_COLUMNS: InputColumn<ChangeEntry>[] = [
+  { name: 'seq', type: 'bigint', get: (e) => e.seq },
+  { name: 'kind', type: 'text', get: (e) => e.kind, shareable: true },
+  { name: 'record_id', type: 'uuid', get: (e) => e.recordId },
+  { name: 'version', type: 'int', get: (e) => e.version, shareable: true },
+  { name: 'mutation_id', type: 'uuid', get: (e) => e.mutationId },
+  { name: 'device_id', type: 'text', get: (e) => e.deviceId, shareable: true },
+  { name: 'user_id', type: 'uuid', get: (e) => e.userId, shareable: true },
+  { name: 'hlc', type: 'text', get: (e) => e.hlc },
+  { name: 'patch', type: 'jsonb', get: (e) => e.patch },
+  { name: 'deleted', type: 'boolean', get: (e) => e.deleted, shareable: true },
+  { name: 'status', type: 'text', get: (e) => e.status, shareable: true },
+];
 
 /**
  * Writes a batch in one statement: each kind's records upserted and the changes appended to the
@@ -18,27 +33,16 @@ export async function writeChanges(
   const params: unknown[] = [clubId, lastSeq];
   const parts: string[] = [];
   for (const [kind, recs] of records) {
-    if (!recs.length) continue;
-    params.push(recordStore.rowsJson(kind, recs));
-    parts.push(`r${parts.length} AS (${recordStore.upsertSql(kind, params.length)})`);
+    if (recs.length) parts.push(`r${parts.length} AS (${recordStore.upsertInto(kind, recs, params)})`);
   }
   parts.push('club_seq AS (UPDATE sync_club_state SET last_seq = $2 WHERE club_id = $1)');
-  params.push(changesJson(entries));
+  const { exprs, from } = batchInput(entries, CHANGE_COLUMNS, params);
   await em.query(
     `WITH ${parts.join(',\n')}
-     INSERT INTO sync_changes (club_id, seq, kind, record_id, version, mutation_id, device_id, user_id, hlc, patch, deleted, status)
-     SELECT $1, seq, kind, record_id, version, mutation_id, device_id, user_id, hlc, patch, deleted, status
-     FROM json_to_recordset($${params.length}::json) AS x(seq bigint, kind text, record_id uuid, version int, mutation_id uuid,
-       device_id text, user_id uuid, hlc text, patch jsonb, deleted boolean, status text)`,
+     INSERT INTO sync_changes (club_id, ${CHANGE_COLUMNS.map((c) => c.name).join(', ')})
+     SELECT $1, ${exprs.join(', ')} FROM ${from}`,
     params,
   );
-}
-
-function changesJson(entries: ChangeEntry[]): string {
-  return JSON.stringify(entries.map((e) => ({
-    seq: e.seq, kind: e.kind, record_id: e.recordId, version: e.version, mutation_id: e.mutationId, device_id: e.deviceId,
-    user_id: e.userId, hlc: e.hlc, patch: e.patch, deleted: e.deleted, status: e.status,
-  })));
 }
 
 /** Stores the conflicts a batch raised, in one statement. */

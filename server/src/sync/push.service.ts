@@ -100,7 +100,7 @@ export class PushService {
 /** What one accepted mutation wrote, for the change log and the record's history. */
 function changeEntry(rec: StoredRecord, prev: Record<string, unknown>, m: Mutation, result: MutationResult): ChangeEntry {
   const patch: Record<string, unknown> = {};
-  for (const [k, v] of Object.entries(rec.fields)) if (!deepEqual(prev[k], v)) patch[k] = v;
+  for (const k in rec.fields) if (!deepEqual(prev[k], rec.fields[k])) patch[k] = rec.fields[k];
   return {
     seq: rec.changeSeq, kind: rec.kind, recordId: rec.id, version: rec.version, mutationId: m.mutationId,
     deviceId: rec.lastActor.deviceId, userId: rec.lastActor.userId, hlc: m.hlc, patch, deleted: rec.deleted, status: result.status,

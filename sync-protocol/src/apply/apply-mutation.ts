@@ -89,8 +89,10 @@ export function applyMutation(ctx: ApplyContext, m: Mutation): MutationResult {
   if (changed) {
     club.changeSeq += 1;
     const stamps = { ...(stored?.fieldStamps ?? {}) };
-    for (const f of Object.keys(merge.apply)) stamps[f] = { actor, hlc: m.hlc };
-    if (!stored || merge.deleted !== stored.deleted) stamps.deleted = { actor, hlc: m.hlc };
+    // One stamp for every field this write set (stamps are never changed in place).
+    const stamp = { actor, hlc: m.hlc };
+    for (const f of Object.keys(merge.apply)) stamps[f] = stamp;
+    if (!stored || merge.deleted !== stored.deleted) stamps.deleted = stamp;
     record = {
       id: m.recordId,
       kind: m.kind,

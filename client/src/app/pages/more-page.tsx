@@ -43,9 +43,17 @@ export function MorePage() {
           >
             <ListItemText primary="Sunlight colours" secondary="High contrast for bright sun and glare" />
           </ListItem>
+          <ListItemButton component={RouterLink} to={paths.members.href()}>
+            <ListItemText primary="Members on this device" secondary="Switch member with a PIN, or add one to share this device" />
+          </ListItemButton>
           {canUseReviewDesk(role) && (
             <ListItemButton component={RouterLink} to={paths.reviewDesk.href()}>
               <ListItemText primary="Review desk" secondary="Best on a desktop screen" />
+            </ListItemButton>
+          )}
+          {canUseReviewDesk(role) && (
+            <ListItemButton component={RouterLink} to={paths.templates.href()}>
+              <ListItemText primary="Check templates" secondary="What the launch and stow checks ask; admins edit them" />
             </ListItemButton>
           )}
           {canAdminister(role) && (

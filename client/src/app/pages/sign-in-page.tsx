@@ -4,7 +4,9 @@ import Paper from '@mui/material/Paper';
 import Typography from '@mui/material/Typography';
 import Link from '@mui/material/Link';
 import { Link as RouterLink, Navigate, useNavigate, useSearchParams } from 'react-router-dom';
+import Button from '@mui/material/Button';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
+import { useDeviceMembers } from '@/features/auth/members/use-members';
 import { useAuthState } from '@/features/auth/use-auth';
 import { paths, safeNextPath } from '../paths';
 
@@ -13,6 +15,7 @@ export function SignInPage() {
   const navigate = useNavigate();
   const [params] = useSearchParams();
   const next = safeNextPath(params.get('next'));
+  const onDevice = useDeviceMembers().length;
   // Navigation after a successful sign-in is done by the form's callback; this covers a visit while signed in.
   if (session) return <Navigate to={next} replace />;
   return (
@@ -33,6 +36,11 @@ export function SignInPage() {
           </Alert>
         )}
         <SignInForm onSignedIn={() => navigate(next, { replace: true })} />
+        {onDevice > 0 && (
+          <Button component={RouterLink} to={paths.members.href(next)} fullWidth size="large" sx={{ mt: 2 }}>
+            Switch member: someone already signed in on this device
+          </Button>
+        )}
         <Typography variant="body2" color="text.secondary" sx={{ mt: 3 }}>
           Forgotten your password?{' '}
           <Link component={RouterLink} to={paths.forgotPassword.href()}>

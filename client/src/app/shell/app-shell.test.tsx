@@ -69,7 +69,7 @@ describe('app shell', () => {
     renderApp('/', sessionAnswer('crew'));
     const user = userEvent.setup();
     await user.click(await screen.findByRole('button', { name: 'Account: Ria Okafor' }));
-    await user.click(screen.getByRole('menuitem', { name: 'Sign out' }));
+    await user.click(await screen.findByRole('menuitem', { name: 'Sign out' }));
     expect(await screen.findByRole('button', { name: 'Sign in' })).toBeInTheDocument();
     expect(localStorage.getItem(STORAGE_KEY)).toBeNull();
     await waitFor(() => expect(calls.find((c) => c.path === '/api/auth/logout')?.body).toEqual({ refreshToken: 'refresh-1' }));

@@ -16,15 +16,23 @@ export async function login(input: LoginInput): Promise<SessionAnswer> {
   return parseSessionAnswer(answer);
 }
 
-/** Signs in and keeps the session; a cache left from another person is dropped first. */
-export function useLogin() {
+/** The usual keeping of a sign-in: this person becomes the one signed in on this device. */
+function keepSession(answer: SessionAnswer): void {
+  tokenStore.saveSession(answer);
+  noteSignedIn(answer);
+}
+
+/**
+ * Signs in and keeps the session; a cache left from another person is dropped first. `keep`
+ * replaces how the answer is kept (a member added to a shared device, see members/device.ts).
+ */
+export function useLogin(keep: (answer: SessionAnswer) => void | Promise<void> = keepSession) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: login,
-    onSuccess: (answer) => {
+    onSuccess: async (answer) => {
       queryClient.clear();
-      tokenStore.saveSession(answer);
-      noteSignedIn(answer);
+      await keep(answer);
     },
   });
 }

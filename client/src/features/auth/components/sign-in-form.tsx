@@ -19,10 +19,18 @@ function serverMessage(error: unknown): string {
   return 'Signing in did not work. Try again.';
 }
 
-export function SignInForm({ onSignedIn }: { onSignedIn: (answer: SessionAnswer) => void }) {
-  const [values, setValues] = useState<SignInValues>({ email: '', password: '' });
+export interface SignInFormProps {
+  onSignedIn: (answer: SessionAnswer) => void;
+  /** Filled in for a member this device already knows. */
+  email?: string;
+  /** How the answer is kept, when not as the one person signed in (see useLogin). */
+  keep?: (answer: SessionAnswer) => void | Promise<void>;
+}
+
+export function SignInForm({ onSignedIn, email = '', keep }: SignInFormProps) {
+  const [values, setValues] = useState<SignInValues>({ email, password: '' });
   const [problems, setProblems] = useState<SignInProblems>({});
-  const login = useLogin();
+  const login = useLogin(keep);
 
   const change = (field: keyof SignInValues) => (event: { target: { value: string } }) => {
     setValues((v) => ({ ...v, [field]: event.target.value }));

@@ -119,3 +119,8 @@ if (typeof window !== 'undefined') {
     if (event.key === MEMBERS_KEY || event.key === null) roster.reload();
   });
 }
+
+/** Whether anyone on this device can be switched to with a PIN: then a lost session leads to Switch member. */
+export function anyoneByPin(): boolean {
+  return roster.getState().some((m) => m.pin !== null && m.session !== null);
+}

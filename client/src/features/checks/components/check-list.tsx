@@ -8,6 +8,7 @@ import { paths } from '@/app/paths';
 import { EmptyState } from '@/components/empty-state';
 import { useRecords } from '@/db/hooks';
 import type { LocalRecord } from '@/db/types';
+import { canUseReviewDesk } from '@/features/auth/roles';
 import { useSession } from '@/features/auth/use-auth';
 import { CheckRow } from './check-row';
 import { newestFirst } from '../model/order';
@@ -39,6 +40,9 @@ export function CheckList() {
       </Box>
       <Group title="In progress" checks={open} boats={boats} zone={activeClub.timeZone} />
       <Group title="Completed" checks={done} boats={boats} zone={activeClub.timeZone} />
+      {canUseReviewDesk(activeClub.role) && (
+        <Button component={RouterLink} to={paths.templates.href()} size="large">What the checks ask: check templates</Button>
+      )}
       {checks.length === 0 && (
         <EmptyState title="No checks yet">
           Launch checks and stow checks run on this phone show here. Each answer is saved on the phone as you go and sent to the

@@ -50,12 +50,12 @@ export const ItemEditor = memo(function ItemEditor({ item, si, index, count, err
       <KindFields item={item} at={at} errors={errors} chambers={chambers} onChange={onChange} />
       <CriticalPicker value={item.critical} onChange={(critical) => onChange({ critical })} />
       <TextField
-        label="Caution shown with this item (optional)"
+        label="Caution (optional)"
         value={item.caution}
         multiline
         onChange={(e) => onChange({ caution: e.target.value })}
         error={Boolean(err('caution'))}
-        helperText={err('caution') ?? 'A safety reminder, e.g. for propellers or fuel. The manual and the club’s procedures come first.'}
+        helperText={err('caution') ?? 'Shown with this item: a safety reminder, e.g. for propellers or fuel. The manual and the club’s procedures come first.'}
       />
       {item.caution.trim() && (
         <Alert severity="warning" variant="outlined" role="note" aria-label={`Caution of item ${index + 1}`}>

@@ -75,7 +75,7 @@ describe('the check template editor', () => {
     await user.click(added.getByRole('combobox', { name: 'Answered by' }));
     await user.click(await screen.findByRole('option', { name: 'Count against a required number' }));
     await retype(user, itemOf(section(5), 5).getByLabelText('How many must be there'), '1');
-    await retype(user, itemOf(section(5), 5).getByLabelText('Caution shown with this item (optional)'), 'Clip it to the driver before starting.');
+    await retype(user, itemOf(section(5), 5).getByLabelText('Caution (optional)'), 'Clip it to the driver before starting.');
     expect(itemOf(section(5), 5).getByRole('note', { name: 'Caution of item 5' })).toHaveTextContent('Clip it to the driver before starting.');
 
     await user.click(screen.getByRole('button', { name: 'Save as version 2' }));

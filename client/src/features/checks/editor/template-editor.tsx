@@ -112,6 +112,8 @@ function EditorBody({ checkType, templates, boats }: { checkType: CheckType; tem
     setSaved(null);
     if (!built.ok) {
       openAt(Object.keys(built.errors));
+      // To the first box to fix; the list of all of them is by the Save button.
+      setScrollTo(keyAt(store.draft, Object.keys(built.errors)[0]!) ?? null);
       return;
     }
     setSaving(true);
@@ -143,11 +145,6 @@ function EditorBody({ checkType, templates, boats }: { checkType: CheckType; tem
       {!current && (
         <Alert severity="info">
           The club has no {name.toLowerCase()} template yet. This is Breakline's default: edit it to the club's boats and procedures, then save it as version 1.
-        </Alert>
-      )}
-      {saved !== null && (
-        <Alert severity="success">
-          Saved as version {saved}. Checks started from now on use it; checks already run, or in progress, keep the version they began with.
         </Alert>
       )}
       {movedOn && !untouched && (
@@ -183,6 +180,12 @@ function EditorBody({ checkType, templates, boats }: { checkType: CheckType; tem
               p: 1.5, display: 'grid', gridTemplateColumns: '1fr 1.4fr', gap: 1, alignItems: 'center',
             }}
           >
+            {saved !== null && (
+              // Beside the button pressed, so it is seen wherever the page was scrolled to.
+              <Alert severity="success" role="status" sx={{ gridColumn: '1 / -1' }}>
+                Saved as version {saved}. Checks started from now on use it; checks already run, or in progress, keep the version they began with.
+              </Alert>
+            )}
             <Button variant="outlined" size="large" disabled={!store.dirty || saving} onClick={() => { reset(current?.id ?? null, clean); setAttempted(false); setRefusal(null); }} sx={{ minHeight: 56 }}>
               Discard changes
             </Button>

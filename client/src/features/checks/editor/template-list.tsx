@@ -7,10 +7,11 @@ import ListItem from '@mui/material/ListItem';
 import ListItemText from '@mui/material/ListItemText';
 import Paper from '@mui/material/Paper';
 import Typography from '@mui/material/Typography';
+import { kindSpec, roleAtLeast } from '@breakline/sync-protocol';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths } from '@/app/paths';
 import { PageHeader } from '@/components/page-header';
-import { useRecords } from '@/db/hooks';
+import { useRecords, useReplica } from '@/db/hooks';
 import type { LocalRecord } from '@/db/types';
 import { CHECK_NAMES } from '../components/check-names';
 import { currentTemplate } from '../model/current-template';
@@ -25,6 +26,8 @@ function TypeCard({ type, templates, checks }: { type: 'launch' | 'stow'; templa
   const versions = versionsOf(templates, type);
   const current = currentTemplate(templates, type);
   const used = (id: string) => checks.filter((c) => c.fields.templateId === id).length;
+  const editor = roleAtLeast(useReplica().role, kindSpec('checkTemplate').access.update);
+  const verb = !editor ? 'Read' : current ? 'Edit' : 'Set up';
   const twins = current ? versions.filter((v) => v.fields.templateVersion === current.fields.templateVersion && !v.fields.retired) : [];
   return (
     <Paper component="section" aria-label={CHECK_NAMES[type]} variant="outlined" sx={{ p: 2, display: 'grid', gap: 1 }}>
@@ -37,7 +40,7 @@ function TypeCard({ type, templates, checks }: { type: 'launch' | 'stow'; templa
         </Alert>
       )}
       <Button component={RouterLink} to={paths.templateEdit.href(type)} variant="contained" size="large" sx={{ minHeight: 56 }}>
-        {current ? `Edit the ${CHECK_NAMES[type].toLowerCase()}` : `Set up the ${CHECK_NAMES[type].toLowerCase()}`}
+        {verb} the {CHECK_NAMES[type].toLowerCase()}
       </Button>
       {versions.length > 0 && (
         <List dense disablePadding aria-label={`${CHECK_NAMES[type]} versions`}>

@@ -62,18 +62,20 @@ export function SeasonReport() {
           <Typography variant="body2" color="text.secondary">{calendarRange(from, to)}, both days included</Typography>
           <Typography variant="body2" color="text.secondary">Local dates at the club ({activeClub.timeZone})</Typography>
         </Box>
-        <Button
-          variant="outlined" startIcon={<FileDownloadOutlined />} disabled={!figures.data}
-          onClick={() => figures.data && saveFile(new Blob([figuresCsv(figures.data, boatName)], { type: 'text/csv;charset=utf-8' }), `breakline-season-figures-${from}-to-${to}.csv`)}
-        >
-          Figures as CSV
-        </Button>
-        <Button
-          variant="contained" startIcon={<PictureAsPdfOutlined />} disabled={pdf.isPending || Boolean(problem)}
-          onClick={() => { setJob(null); pdf.mutate({ from, to }); }}
-        >
-          {pdf.isPending ? 'Making the PDF…' : 'PDF for the committee'}
-        </Button>
+        <Stack direction="row" spacing={1} sx={{ flexShrink: 0 }}>
+          <Button
+            variant="outlined" startIcon={<FileDownloadOutlined />} disabled={!figures.data}
+            onClick={() => figures.data && saveFile(new Blob([figuresCsv(figures.data, boatName)], { type: 'text/csv;charset=utf-8' }), `breakline-season-figures-${from}-to-${to}.csv`)}
+          >
+            Figures as CSV
+          </Button>
+          <Button
+            variant="contained" startIcon={<PictureAsPdfOutlined />} disabled={pdf.isPending || Boolean(problem)}
+            onClick={() => { setJob(null); pdf.mutate({ from, to }); }}
+          >
+            {pdf.isPending ? 'Making the PDF…' : 'PDF for the committee'}
+          </Button>
+        </Stack>
       </Stack>
       {pdf.isPending && job && <Alert severity="info" icon={<CircularProgress size={20} />}>{JOB_WORDS[job]}</Alert>}
       {pdf.isSuccess && <Alert severity="success">{JOB_WORDS.done}</Alert>}

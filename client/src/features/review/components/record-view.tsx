@@ -99,7 +99,7 @@ function VersionCard({ kind, v, ctx, deviceId }: { kind: RecordKind; v: RecordVe
               <TableRow key={c.field}>
                 <TableCell>{fieldHeading(kind, c.field, ctx)}</TableCell>
                 {v.version > 1 && <TableCell sx={{ color: 'text.secondary', overflowWrap: 'anywhere' }}>{valueText(kind, c.field, c.from, ctx)}</TableCell>}
-                <TableCell sx={{ overflowWrap: 'anywhere' }}>{valueText(kind, c.field, c.to, ctx)}</TableCell>
+                <TableCell sx={{ overflowWrap: 'anywhere' }}><LinkedValue kind={kind} field={c.field} value={c.to} ctx={ctx} /></TableCell>
               </TableRow>
             ))}
           </TableBody>
@@ -151,7 +151,9 @@ function KnownRecord({ kind, id }: { kind: RecordKind; id: string }) {
   const versions = history.data ?? [];
   const fromServer = fieldsFromVersions(versions);
   const fields = (local?.fields ?? fromServer.fields) as Record<string, unknown>;
-  const ctx = useValueContext(fields.templateId);
+  // A defect raised from a check names the check's item: its label comes from that check's template.
+  const sourceCheck = useRecord('check', kind === 'defect' && typeof fields.checkId === 'string' ? fields.checkId : undefined);
+  const ctx = useValueContext(fields.templateId ?? sourceCheck?.fields.templateId);
   const deviceId = useDeviceId();
   const conflicts = useConflicts('open');
   const mine = (conflicts.data ?? []).filter((c) => c.recordId === id);

@@ -51,6 +51,8 @@ export function valueText(kind: RecordKind, field: string, value: unknown, ctx: 
     const entries = Object.entries(value);
     return entries.length === 0 ? 'no answers' : entries.map(([id, r]) => `${ctx.itemLabel?.(id) ?? id}: ${itemResultText(r)}`).join('; ');
   }
+  if (top === 'itemId' && typeof value === 'string') return ctx.itemLabel?.(value) ?? value;
+  if ((top === 'checkId' || top === 'tripId') && typeof value === 'string') return `${top === 'checkId' ? 'check' : 'trip'} ending ${value.slice(-6)}`;
   if (top === 'boatId') return ctx.boat(value);
   if (top === 'motorId') return ctx.motor(value);
   if (PERSON_FIELDS.has(top)) return ctx.member(value);

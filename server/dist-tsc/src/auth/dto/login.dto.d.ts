@@ -1,0 +1,5 @@
+export declare class LoginDto {
+    email: string;
+    password: string;
+    clubId?: string;
+}

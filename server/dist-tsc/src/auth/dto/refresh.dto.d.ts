@@ -1,0 +1,6 @@
+export declare class RefreshDto {
+    refreshToken: string;
+}
+export declare class SwitchClubDto extends RefreshDto {
+    clubId: string;
+}

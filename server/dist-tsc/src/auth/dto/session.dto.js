@@ -1,0 +1,2 @@
+export {};
+//# sourceMappingURL=session.dto.js.map

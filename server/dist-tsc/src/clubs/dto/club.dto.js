@@ -1,0 +1,2 @@
+export {};
+//# sourceMappingURL=club.dto.js.map

@@ -1,0 +1,3 @@
+/** Provides the validated settings as the `Env` class, read once. */
+export declare class AppConfigModule {
+}

@@ -1,0 +1,2 @@
+export const MAIL_QUEUE = 'mail.send';
+//# sourceMappingURL=mail.types.js.map

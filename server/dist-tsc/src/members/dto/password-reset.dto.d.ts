@@ -1,0 +1,7 @@
+export declare class PasswordResetRequestDto {
+    email: string;
+}
+export declare class PasswordResetConfirmDto {
+    token: string;
+    password: string;
+}

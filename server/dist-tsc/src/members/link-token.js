@@ -1,0 +1,21 @@
+import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
+/** Tokens in mailed links are `<row id>.<secret>`; the row keeps only the secret's SHA-256. */
+export function newSecret() {
+    const secret = randomBytes(32).toString('base64url');
+    return { secret, hash: sha256(secret) };
+}
+export const linkToken = (id, secret) => `${id}.${secret}`;
+/** The row id and secret of a token, or null when it cannot be one of ours. */
+export function splitToken(token) {
+    const [id, secret, extra] = token.trim().split('.');
+    if (extra !== undefined || !id || !secret || !/^[0-9a-f-]{36}$/i.test(id) || !/^[A-Za-z0-9_-]{20,100}$/.test(secret))
+        return null;
+    return { id, secret };
+}
+export function secretMatches(hash, secret) {
+    const a = Buffer.from(hash, 'hex');
+    const b = Buffer.from(sha256(secret), 'hex');
+    return a.length === b.length && timingSafeEqual(a, b);
+}
+const sha256 = (s) => createHash('sha256').update(s).digest('hex');
+//# sourceMappingURL=link-token.js.map

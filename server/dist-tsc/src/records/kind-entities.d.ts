@@ -1,0 +1,2 @@
+import { EntitySchema } from 'typeorm';
+export declare const KIND_ENTITIES: EntitySchema<any>[];

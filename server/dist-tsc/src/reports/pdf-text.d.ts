@@ -1,0 +1,1 @@
+export declare function pdfSafe(s: string): string;

@@ -1,0 +1,2 @@
+export {};
+//# sourceMappingURL=season.types.js.map

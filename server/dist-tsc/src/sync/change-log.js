@@ -1,0 +1,46 @@
+import { recordStore } from '../records/record-store.js';
+import { batchInput } from '../records/batch-input.js';
+const CHANGE_COLUMNS = [
+    { name: 'seq', type: 'bigint', get: (e) => e.seq },
+    { name: 'kind', type: 'text', get: (e) => e.kind, shareable: true },
+    { name: 'record_id', type: 'uuid', get: (e) => e.recordId },
+    { name: 'version', type: 'int', get: (e) => e.version, shareable: true },
+    { name: 'mutation_id', type: 'uuid', get: (e) => e.mutationId },
+    { name: 'device_id', type: 'text', get: (e) => e.deviceId, shareable: true },
+    { name: 'user_id', type: 'uuid', get: (e) => e.userId, shareable: true },
+    { name: 'hlc', type: 'text', get: (e) => e.hlc },
+    { name: 'patch', type: 'jsonb', get: (e) => e.patch },
+    { name: 'deleted', type: 'boolean', get: (e) => e.deleted, shareable: true },
+    { name: 'status', type: 'text', get: (e) => e.status, shareable: true },
+];
+/**
+ * Writes a batch in one statement: each kind's records upserted and the changes appended to the
+ * log, as data-modifying parts of one WITH, and the club's change counter moved to `lastSeq`.
+ * One statement is one trip to the database and one plan, however many kinds the batch touches.
+ */
+export async function writeChanges(em, clubId, records, entries, lastSeq) {
+    const params = [clubId, lastSeq];
+    const parts = [];
+    for (const [kind, recs] of records) {
+        if (recs.length)
+            parts.push(`r${parts.length} AS (${recordStore.upsertInto(kind, recs, params)})`);
+    }
+    parts.push('club_seq AS (UPDATE sync_club_state SET last_seq = $2 WHERE club_id = $1)');
+    const { exprs, from } = batchInput(entries, CHANGE_COLUMNS, params);
+    await em.query(`WITH ${parts.join(',\n')}
+     INSERT INTO sync_changes (club_id, ${CHANGE_COLUMNS.map((c) => c.name).join(', ')})
+     SELECT $1, ${exprs.join(', ')} FROM ${from}`, params);
+}
+/** Stores the conflicts a batch raised, in one statement. */
+export async function insertConflicts(em, conflicts) {
+    if (!conflicts.length)
+        return;
+    await em.query(`INSERT INTO sync_conflicts (id, club_id, record_id, kind, field, kept_value, overruled_value, kept, overruled, status, created_at)
+     SELECT id, club_id, record_id, kind, field, kept_value, overruled_value, kept, overruled, status, created_at
+     FROM jsonb_to_recordset($1::jsonb) AS x(id uuid, club_id uuid, record_id uuid, kind text, field text, kept_value jsonb,
+       overruled_value jsonb, kept jsonb, overruled jsonb, status text, created_at timestamptz)`, [JSON.stringify(conflicts.map((c) => ({
+            id: c.id, club_id: c.clubId, record_id: c.recordId, kind: c.kind, field: c.field, kept_value: c.keptValue ?? null,
+            overruled_value: c.overruledValue ?? null, kept: c.kept, overruled: c.overruled, status: c.status, created_at: c.createdAt,
+        })))]);
+}
+//# sourceMappingURL=change-log.js.map
