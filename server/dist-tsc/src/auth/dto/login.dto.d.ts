@@ -1,5 +1,0 @@
-export declare class LoginDto {
-    email: string;
-    password: string;
-    clubId?: string;
-}

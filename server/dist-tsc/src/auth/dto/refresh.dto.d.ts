@@ -1,6 +1,0 @@
-export declare class RefreshDto {
-    refreshToken: string;
-}
-export declare class SwitchClubDto extends RefreshDto {
-    clubId: string;
-}

@@ -1,2 +1,0 @@
-export {};
-//# sourceMappingURL=club.dto.js.map

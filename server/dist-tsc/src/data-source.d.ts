@@ -1,4 +1,0 @@
-import 'reflect-metadata';
-import { DataSource } from 'typeorm';
-declare const _default: DataSource;
-export default _default;

@@ -1,2 +1,0 @@
-export const MAIL_QUEUE = 'mail.send';
-//# sourceMappingURL=mail.types.js.map

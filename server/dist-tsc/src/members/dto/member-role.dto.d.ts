@@ -1,4 +1,0 @@
-import { type Role } from '@breakline/sync-protocol';
-export declare class MemberRoleDto {
-    role: Role;
-}

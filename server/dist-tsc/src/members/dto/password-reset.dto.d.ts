@@ -1,7 +1,0 @@
-export declare class PasswordResetRequestDto {
-    email: string;
-}
-export declare class PasswordResetConfirmDto {
-    token: string;
-    password: string;
-}

@@ -1,2 +1,0 @@
-import { EntitySchema } from 'typeorm';
-export declare const KIND_ENTITIES: EntitySchema<any>[];

@@ -1,2 +1,0 @@
-export {};
-//# sourceMappingURL=season.types.js.map
