@@ -22,6 +22,7 @@ describe('default check templates', () => {
     const readings = items(DEFAULT_LAUNCH_TEMPLATE).filter((i) => i.kind === 'reading');
     expect(readings.map((i) => i.chamberId)).toEqual(['port', 'starboard', 'bow']);
     expect(readings.every((i) => i.critical && i.unit === 'kPa')).toBe(true);
+    expect(byId(DEFAULT_LAUNCH_TEMPLATE, 'valve-caps').label).toMatch(/All three valve caps/);
   });
 
   // Common practice, no source: the fuel bladder is held to the floor at four points by clips that face down.

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { atLeastZero, label, recordId, utcTime } from './common.js';
+import { atLeastZero, label, recordId, text, utcTime } from './common.js';
 import { defineKind } from './spec.js';
 
 /** A service done on a motor; the motor's service due is worked out from these. */
@@ -10,6 +10,8 @@ export const serviceRecordSpec = defineKind({
     servicedAt: utcTime(),
     engineHours: atLeastZero(),
     work: label(4000),
+    /** Parts fitted or used; empty when none. */
+    parts: text(2000),
     /** Name of whoever did it; may be an outside mechanic, so not a member id. */
     performedBy: label(120),
   }),

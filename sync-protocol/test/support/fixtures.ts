@@ -121,7 +121,7 @@ export const FIXTURES: { [K in RecordKind]: KindFields[K] } = {
     text: '',
     authorId: 'member-ana',
   },
-  serviceRecord: { motorId: ID.motor, servicedAt: AT, engineHours: 212.5, work: 'Gearbox oil changed', performedBy: 'club gear officer' },
+  serviceRecord: { motorId: ID.motor, servicedAt: AT, engineHours: 212.5, work: 'Gearbox oil changed', parts: 'Gearbox oil 500 mL', performedBy: 'club gear officer' },
   daySignOff: { sessionDate: '2026-12-06', boatId: null, signedOffBy: 'member-ben', signedOffAt: AT, note: 'All boats washed down' },
   member: {
     memberId: 'member-ben',

@@ -10,7 +10,11 @@ const emailBox = () => screen.getByLabelText('E-mail');
 const passwordBox = () => screen.getByLabelText('Password');
 const signInButton = () => screen.getByRole('button', { name: 'Sign in' });
 
+/** The sign-in screen loads on demand: wait for it once, then read it directly. */
+const shown = () => screen.findByRole('button', { name: 'Sign in' });
+
 async function fillAndSubmit(email: string, password: string) {
+  await shown();
   const user = userEvent.setup();
   if (email) await user.type(emailBox(), email);
   if (password) await user.type(passwordBox(), password);
@@ -43,6 +47,7 @@ describe('sign-in form', () => {
   it('labels only the password box "password" (the show/hide button is worded apart)', async () => {
     mockApi({});
     renderApp('/sign-in');
+    await shown();
     expect(screen.getAllByLabelText(/password/i)).toEqual([passwordBox()]);
     expect(screen.getAllByLabelText(/e-mail/i)).toEqual([emailBox()]);
   });

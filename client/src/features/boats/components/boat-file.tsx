@@ -42,7 +42,7 @@ export function BoatFile(props: { boatId: string; defects: ReactNode; checks: Re
       <SectionCard title="Motor fitted">
         {motors.length === 0 && <Typography sx={{ color: 'text.secondary' }}>No motor is fitted to this boat in its record.</Typography>}
         {motors.map((m) => (
-          <MotorSummary key={m.id} motor={m} trips={fleet.trips} ctx={ctx} />
+          <MotorSummary key={m.id} motor={m} sources={fleet} ctx={ctx} />
         ))}
       </SectionCard>
       <SectionCard title="Required gear">

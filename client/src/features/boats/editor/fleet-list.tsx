@@ -11,11 +11,17 @@ import { paths } from '@/app/paths';
 import { PageHeader } from '@/components/page-header';
 import { useRecords } from '@/db/hooks';
 import { useSession } from '@/features/auth/use-auth';
+import { useNow } from '../hooks/use-now';
+import { motorService } from '../service/motor-service';
+import { ServiceStateLine } from '../service/service-state-line';
 
 /** The club's boats and motors, to open and (for supervisors and admins) edit or add. */
 export function FleetList() {
   const boats = useRecords('boat') ?? [];
   const motors = useRecords('motor') ?? [];
+  const serviceRecords = useRecords('serviceRecord') ?? [];
+  const trips = useRecords('trip') ?? [];
+  const now = useNow();
   const { activeClub } = useSession();
   const editor = roleAtLeast(activeClub.role, 'supervisor');
   const boatName = (id: string | null) => boats.find((b) => b.id === id)?.fields.name;
@@ -39,7 +45,16 @@ export function FleetList() {
         <List disablePadding aria-label="Motors">
           {motors.map((m) => (
             <ListItemButton key={m.id} component={RouterLink} to={paths.motorEdit.href(m.id)}>
-              <ListItemText primary={`${m.fields.model} · ${m.fields.serial}`} secondary={m.fields.boatId ? `Fitted to ${boatName(m.fields.boatId) ?? 'a boat not on this phone'}` : 'In the store'} />
+              <ListItemText
+                primary={`${m.fields.model} · ${m.fields.serial}`}
+                secondary={
+                  <>
+                    {m.fields.boatId ? `Fitted to ${boatName(m.fields.boatId) ?? 'a boat not on this phone'}` : 'In the store'}
+                    <ServiceStateLine component="span" status={motorService(m, { serviceRecords, trips }, now, activeClub.timeZone).status} />
+                  </>
+                }
+                slotProps={{ secondary: { component: 'span', sx: { display: 'grid' } } }}
+              />
             </ListItemButton>
           ))}
           {motors.length === 0 && <ListItemText sx={{ p: 2 }} primary="No motors yet." />}

@@ -11,6 +11,7 @@ import { useSession } from '@/features/auth/use-auth';
 import { motorDraftOf, newMotorDraft } from './motor-draft';
 import { MotorForm } from './motor-form';
 import { ReadOnlyNote } from './read-only-note';
+import { ServiceSection } from '../service/service-section';
 
 /** A motor's page: its record (editable by supervisors and admins) and, below, `history`. */
 export function MotorEditor({ motorId, history }: { motorId: string; history?: ReactNode }) {
@@ -29,6 +30,7 @@ export function MotorEditor({ motorId, history }: { motorId: string; history?: R
       <PageHeader title={motor ? `Motor ${motor.fields.serial}` : 'New motor'} subtitle="Motor specification and service" />
       {!editable && <ReadOnlyNote what="this motor's record" />}
       <MotorForm key={motor?.id ?? 'new'} motorId={motor?.id ?? null} fittedTo={motor?.fields.boatId ?? null} initial={initial} editable={editable} onSaved={() => navigate(paths.fleet.href())} />
+      {motor && <ServiceSection motor={motor} />}
       {motor && history}
     </Box>
   );

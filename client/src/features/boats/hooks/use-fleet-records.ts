@@ -15,11 +15,12 @@ export function useFleetRecords(): Fleet | undefined {
   const defects = useRecords('defect');
   const motors = useRecords('motor');
   const trips = useRecords('trip');
+  const serviceRecords = useRecords('serviceRecord');
   return useMemo(
     () =>
-      boats && checks && templates && defects && motors && trips
-        ? { boats, checks, templates, defects, motors, trips }
+      boats && checks && templates && defects && motors && trips && serviceRecords
+        ? { boats, checks, templates, defects, motors, trips, serviceRecords }
         : undefined,
-    [boats, checks, templates, defects, motors, trips],
+    [boats, checks, templates, defects, motors, trips, serviceRecords],
   );
 }

@@ -2,7 +2,7 @@ import { DEFAULT_LAUNCH_TEMPLATE, type BoatState, type PressureUnit } from '@bre
 import { describe, expect, it } from 'vitest';
 import type { LocalRecord } from '@/db/types';
 import {
-  BOAT_ID, boatFields, checkFields, defectFields, launchTemplate, local, motorFields, stowTemplate, tripFields,
+  BOAT_ID, MOTOR_ID, boatFields, checkFields, defectFields, launchTemplate, local, motorFields, stowTemplate, tripFields,
 } from '../testing/records';
 import { readinessInput, readinessOf, type FleetRecords } from './adapt';
 
@@ -19,6 +19,7 @@ function fleet(over: Partial<FleetRecords> = {}): FleetRecords {
     defects: [],
     motors: [local('motor', motorFields())],
     trips: [],
+    serviceRecords: [],
     ...over,
   };
 }
@@ -78,7 +79,27 @@ const rows: Row[] = [
     name: 'motor with no service recorded',
     records: fleet({ checks: [launch(TODAY)], motors: [local('motor', motorFields({ lastServiceAt: null }))] }),
     state: 'limited',
-    reason: 'limited: motor service history not recorded: enter the last service in the boat file',
+    reason: 'limited: motor service history not recorded: record a service on the motor’s page',
+  },
+  {
+    name: 'a service record since the motor record’s service clears the overdue',
+    records: fleet({
+      checks: [launch(TODAY)],
+      motors: [local('motor', motorFields({ hourMeter: 205 }), MOTOR_ID)],
+      serviceRecords: [local('serviceRecord', { motorId: MOTOR_ID, servicedAt: '2026-11-20T01:00:00Z', engineHours: 204, work: 'Full service', parts: '', performedBy: 'Gear officer' })],
+    }),
+    state: 'fit',
+    reason: 'fit: launch check passed at 11:00 today',
+  },
+  {
+    name: 'a trip’s closing hour meter beyond the motor record’s takes the motor past its service',
+    records: fleet({
+      checks: [launch(TODAY)],
+      motors: [local('motor', motorFields({ hourMeter: 150 }), MOTOR_ID)],
+      trips: [local('trip', tripFields({ launchedAt: '2026-11-28T00:30:00Z', retrievedAt: '2026-11-28T03:30:00Z', engineHoursStart: 199, engineHoursEnd: 201.5 }))],
+    }),
+    state: 'limited',
+    reason: 'limited: motor service overdue: 1.5 h past the 200.0 h service; due by 2027-09-01 (274 days)',
   },
   {
     name: 'a motor on another boat is not this boat’s',

@@ -1,7 +1,7 @@
 import { boatReadiness, type DefectInput, type PressureUnit, type Readiness, type ReadinessInput } from '@breakline/sync-protocol';
 import type { LocalRecord } from '@/db/types';
 import { latestCheck, templateFor, toCheckInput } from './check-input';
-import { motorService, motorUsage, worstService } from './motor-input';
+import { motorService, worstService } from '../service/motor-service';
 
 /** Everything on the phone the state of a boat depends on. */
 export interface FleetRecords {
@@ -10,6 +10,7 @@ export interface FleetRecords {
   defects: readonly LocalRecord<'defect'>[];
   motors: readonly LocalRecord<'motor'>[];
   trips: readonly LocalRecord<'trip'>[];
+  serviceRecords: readonly LocalRecord<'serviceRecord'>[];
 }
 
 export interface ReadinessContext {
@@ -33,7 +34,7 @@ export function readinessInput(boat: LocalRecord<'boat'>, records: FleetRecords,
     .filter((d) => d.fields.boatId === boat.id)
     .map(({ fields: d }) => ({ summary: defectSummary(d.description), severity: d.severity, status: d.status, reportedAt: d.reportedAt }));
   const fitted = records.motors.filter((m) => m.fields.boatId === boat.id);
-  const services = fitted.map((m) => motorService(m.fields, motorUsage(m.id, records.trips, ctx.zone), ctx.now, ctx.zone));
+  const services = fitted.map((m) => motorService(m, records, ctx.now, ctx.zone));
   return {
     boat: {
       name: boat.fields.name,
@@ -42,7 +43,7 @@ export function readinessInput(boat: LocalRecord<'boat'>, records: FleetRecords,
     launchCheck: checkInput('launch'),
     stowCheck: checkInput('stow'),
     defects,
-    motorService: worstService(services),
+    motorService: worstService(services.map(({ status, reason }) => ({ status, reason }))),
     trips: records.trips.filter((t) => t.fields.boatId === boat.id).map(({ fields: t }) => ({ launchedAt: t.launchedAt, retrievedAt: t.retrievedAt })),
     now: ctx.now,
     zone: ctx.zone,

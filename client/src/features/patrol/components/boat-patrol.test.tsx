@@ -70,6 +70,26 @@ describe('patrol on Today', () => {
     expect(signOns.map((s) => [s.fields.memberId, s.fields.role])).toEqual([[p.ctx.userId, 'driver'], ['u-sam', 'crew']]);
   }, 60_000);
 
+  it('moves a member signed on to another boat today, signing them off there first', async () => {
+    const { p, session } = await patrolScene();
+    await createRecord(p.seed, 'boat', boatFields({ fleetNumber: 'IRB 2', name: 'Skua' }));
+    const user = userEvent.setup({ delay: null });
+    renderApp('/', session);
+    const tern = within(await screen.findByRole('article', { name: 'IRB 1 · Tern' }, { timeout: 10_000 }));
+    await user.click(await tern.findByRole('button', { name: 'Sign on to Tern' }, { timeout: 10_000 }));
+    await user.click((await dialogTitled('Sign on to IRB 1 · Tern')).getByRole('button', { name: 'Sign on' }));
+    await waitFor(() => expect(tern.getByRole('list', { name: 'Signed on today' })).toHaveTextContent('Driver: You'));
+    const skua = within(screen.getByRole('article', { name: 'IRB 2 · Skua' }));
+    await user.click(skua.getByRole('button', { name: 'Sign on to Skua' }));
+    const dialog = await dialogTitled('Sign on to IRB 2 · Skua');
+    expect(dialog.getByText('This signs you off IRB 1 · Tern first.')).toBeInTheDocument();
+    await user.click(dialog.getByRole('button', { name: 'Sign on' }));
+    await waitFor(() => expect(skua.getByRole('list', { name: 'Signed on today' })).toHaveTextContent('Driver: You'));
+    expect(tern.getByText('Nobody signed on today.')).toBeInTheDocument();
+    const signOns = await listRecords(p.ctx.db, p.ctx.clubId, 'signOn');
+    expect(signOns.map((s) => s.fields.signedOffAt === null)).toEqual([false, true]);
+  }, 60_000);
+
   it('refuses the sign-on when the club blocks it without a current award', async () => {
     const { session } = await patrolScene('block');
     const user = userEvent.setup({ delay: null });

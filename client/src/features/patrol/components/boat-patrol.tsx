@@ -26,7 +26,7 @@ interface Props {
 export function BoatPatrol({ boat, boats, state }: Props) {
   const p = usePatrolContext();
   const now = useClock(30_000);
-  const signOns = useRecords('signOn');
+  const signOns = useRecords('signOn', { boatId: boat.id });
   const trips = useRecords('trip', { boatId: boat.id });
   const motors = useRecords('motor');
   const [signingOn, setSigningOn] = useState(false);
@@ -60,7 +60,7 @@ export function BoatPatrol({ boat, boats, state }: Props) {
       ) : (
         <Typography variant="body2" sx={{ color: 'text.secondary' }}>A driver logs the launch and retrieval.</Typography>
       )}
-      {signingOn && <SignOnDialog open onClose={() => setSigningOn(false)} boat={boat} boats={boats} date={date} signOns={signOns} p={p} />}
+      {signingOn && <SignOnDialog open onClose={() => setSigningOn(false)} boat={boat} boats={boats} date={date} p={p} />}
     </Box>
   );
 }

@@ -11,6 +11,7 @@ import ToggleButton from '@mui/material/ToggleButton';
 import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import Typography from '@mui/material/Typography';
 import { roleAtLeast } from '@breakline/sync-protocol';
+import { useRecords } from '@/db/hooks';
 import type { LocalRecord } from '@/db/types';
 import { useLocalSave } from '@/lib/use-local-save';
 import type { PatrolContext } from '../hooks/use-patrol-context';
@@ -27,12 +28,13 @@ interface Props {
   boat: LocalRecord<'boat'>;
   boats: readonly LocalRecord<'boat'>[];
   date: string;
-  signOns: readonly LocalRecord<'signOn'>[];
   p: PatrolContext;
 }
 
 /** Sign a member on to a boat for today's session, with the award for the role checked first. */
-export function SignOnDialog({ open, onClose, boat, boats, date, signOns, p }: Props) {
+export function SignOnDialog({ open, onClose, boat, boats, date, p }: Props) {
+  // Every boat's sign-ons, read only while the dialog is open: a member signed on elsewhere is moved.
+  const signOns = useRecords('signOn');
   const [memberId, setMemberId] = useState(p.userId);
   const [role, setRole] = useState<SignOnRole>(roleAtLeast(p.role, 'driver') ? 'driver' : 'crew');
   const { refusal, saving, run } = useLocalSave();
@@ -40,7 +42,7 @@ export function SignOnDialog({ open, onClose, boat, boats, date, signOns, p }: P
   const canPick = roleAtLeast(p.role, 'driver');
   const name = memberId === p.userId ? 'you' : p.nameOf(memberId);
   const verdict = signOnVerdict(p.cards.get(memberId), name, role, date, p.rule);
-  const current = openSignOnOf(signOns, memberId, date);
+  const current = signOns ? openSignOnOf(signOns, memberId, date) : undefined;
   const here = current?.fields.boatId === boat.id;
   const elsewhere = current && !here ? boats.find((b) => b.id === current.fields.boatId) : undefined;
   async function confirm() {
@@ -71,7 +73,7 @@ export function SignOnDialog({ open, onClose, boat, boats, date, signOns, p }: P
       </DialogContent>
       <DialogActions sx={{ px: 3, pb: 2 }}>
         <Button onClick={onClose} size="large">Cancel</Button>
-        <Button variant="contained" size="large" onClick={confirm} disabled={saving || here || verdict.level === 'block'} color={verdict.level === 'warn' ? 'warning' : 'primary'}>
+        <Button variant="contained" size="large" onClick={confirm} disabled={saving || !signOns || here || verdict.level === 'block'} color={verdict.level === 'warn' ? 'warning' : 'primary'}>
           {action}
         </Button>
       </DialogActions>
