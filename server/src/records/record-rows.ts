@@ -24,8 +24,14 @@ export function rowToRecord(kind: RecordKind, row: Row): StoredRecord {
 
 type Column = InputColumn<StoredRecord>;
 
-/** The sync columns every kind table has; the shareable ones are often one value for a whole batch. */
-const SYNC_COLUMNS: Column[] = [
+/**
+ * A record as one row of the JSON a bulk write reads (see batchInput and recordStore.upsertParts):
+ * the sync columns, the shareable ones often one value for the whole batch, and the kind's fields
+ * as one object under their own names, which jsonb_to_record then takes apart into columns. The
+ * fields object goes as it is, not copied into columns, and the change log can take a new
+ * record's fields from the same parse.
+ */
+export const RECORD_INPUT_COLUMNS: readonly Column[] = [
   { name: 'id', type: 'uuid', get: (r) => r.id },
   { name: 'club_id', type: 'uuid', get: (r) => r.clubId, shareable: true },
   { name: 'version', type: 'int', get: (r) => r.version, shareable: true },
@@ -37,19 +43,8 @@ const SYNC_COLUMNS: Column[] = [
   { name: 'deleted', type: 'boolean', get: (r) => r.deleted, shareable: true },
   { name: 'change_seq', type: 'bigint', get: (r) => r.changeSeq },
   { name: 'field_stamps', type: 'jsonb', get: (r) => compactStamps(r), whenAbsent: `'{}'::jsonb` },
+  { name: 'fields', type: 'jsonb', get: (r) => r.fields },
 ];
-
-const columnCache = new Map<RecordKind, Column[]>();
-
-/** Record → the columns of its kind table, for writing records in bulk (see batchInput). */
-export function recordColumns(kind: RecordKind): Column[] {
-  let cols = columnCache.get(kind);
-  if (!cols) {
-    cols = [...SYNC_COLUMNS, ...fieldColumns(kind).map((c): Column => ({ name: c.column, type: c.type, get: (r) => r.fields[c.field] }))];
-    columnCache.set(kind, cols);
-  }
-  return cols;
-}
 
 const sameStamp = (s: WriteStamp, r: StoredRecord) =>
   s.hlc === r.hlc && s.actor.deviceId === r.lastActor.deviceId && s.actor.userId === r.lastActor.userId && s.actor.role === r.lastActor.role;

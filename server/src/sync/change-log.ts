@@ -26,21 +26,40 @@ const CHANGE_COLUMNS: InputColumn<ChangeEntry>[] = [
  * Writes a batch in one statement: each kind's records upserted and the changes appended to the
  * log, as data-modifying parts of one WITH, and the club's change counter moved to `lastSeq`.
  * One statement is one trip to the database and one plan, however many kinds the batch touches.
+ * A change whose patch is its record's fields as written (a new record) does not send them
+ * twice: the log takes them from the records' input.
  */
 export async function writeChanges(
   em: EntityManager, clubId: string, records: Map<RecordKind, StoredRecord[]>, entries: ChangeEntry[], lastSeq: number,
 ) {
   const params: unknown[] = [clubId, lastSeq];
   const parts: string[] = [];
+  const inputs: string[] = [];
+  const written = new Set<unknown>();
   for (const [kind, recs] of records) {
-    if (recs.length) parts.push(`r${parts.length} AS (${recordStore.upsertInto(kind, recs, params)})`);
+    if (!recs.length) continue;
+    const name = `in${inputs.length}`;
+    const { input, upsert } = recordStore.upsertParts(kind, recs, params, name);
+    parts.push(input, `up${inputs.length} AS (${upsert})`);
+    inputs.push(name);
+    for (const r of recs) written.add(r.fields);
   }
   parts.push('club_seq AS (UPDATE sync_club_state SET last_seq = $2 WHERE club_id = $1)');
-  const { exprs, from } = batchInput(entries, CHANGE_COLUMNS, params);
+  let shared = false;
+  const columns = CHANGE_COLUMNS.map((c): InputColumn<ChangeEntry> => c.name !== 'patch' ? c : {
+    ...c, get: (e) => (written.has(e.patch) ? ((shared = true), undefined) : e.patch),
+  });
+  const { exprs, from } = batchInput(entries, columns, params);
+  const patch = columns.findIndex((c) => c.name === 'patch');
+  let source = from;
+  if (shared) {
+    exprs[patch] = `coalesce(${exprs[patch]}, w.fields)`;
+    source = `${from} LEFT JOIN (${inputs.map((n) => `SELECT id, fields FROM ${n}`).join(' UNION ALL ')}) w ON x.patch IS NULL AND w.id = x.record_id`;
+  }
   await em.query(
     `WITH ${parts.join(',\n')}
-     INSERT INTO sync_changes (club_id, ${CHANGE_COLUMNS.map((c) => c.name).join(', ')})
-     SELECT $1, ${exprs.join(', ')} FROM ${from}`,
+     INSERT INTO sync_changes (club_id, ${columns.map((c) => c.name).join(', ')})
+     SELECT $1, ${exprs.join(', ')} FROM ${source}`,
     params,
   );
 }

@@ -7,9 +7,23 @@ export interface LockedClub { lastSeq: number; purgedThroughSeq: number }
  * under it, so they commit in order; other clubs have their own rows and never wait on this one.
  */
 export async function lockClub(em: EntityManager, clubId: string): Promise<LockedClub> {
-  await em.query('INSERT INTO sync_club_state (club_id) VALUES ($1) ON CONFLICT DO NOTHING', [clubId]);
-  const [row] = await em.query('SELECT last_seq, purged_through_seq FROM sync_club_state WHERE club_id = $1 FOR UPDATE', [clubId]);
+  const row = await lockRow(em, 'SELECT last_seq, purged_through_seq FROM sync_club_state WHERE club_id = $1 FOR UPDATE',
+    'INSERT INTO sync_club_state (club_id) VALUES ($1) ON CONFLICT DO NOTHING', [clubId]);
   return { lastSeq: Number(row.last_seq), purgedThroughSeq: Number(row.purged_through_seq) };
+}
+
+/**
+ * Locks a row, making it first when there is none. The row is there on all but the first call,
+ * so that costs one statement, not two: a push is a handful of trips to the database, and on a
+ * busy machine each trip waits its turn for the processor.
+ */
+async function lockRow(em: EntityManager, select: string, insert: string, params: unknown[]) {
+  const [row] = await em.query(select, params);
+  if (row) return row;
+  // Two first calls at once: the second insert waits for the first and does nothing; both then lock.
+  await em.query(insert, params);
+  const [made] = await em.query(select, params);
+  return made;
 }
 
 export async function saveClubSeq(em: EntityManager, clubId: string, lastSeq: number) {
@@ -18,8 +32,8 @@ export async function saveClubSeq(em: EntityManager, clubId: string, lastSeq: nu
 
 /** The device's last accepted seq, locked like the club (a device pushes one batch at a time). */
 export async function lockDevice(em: EntityManager, clubId: string, deviceId: string): Promise<number> {
-  await em.query('INSERT INTO sync_devices (club_id, device_id) VALUES ($1, $2) ON CONFLICT DO NOTHING', [clubId, deviceId]);
-  const [row] = await em.query('SELECT last_seq FROM sync_devices WHERE club_id = $1 AND device_id = $2 FOR UPDATE', [clubId, deviceId]);
+  const row = await lockRow(em, 'SELECT last_seq FROM sync_devices WHERE club_id = $1 AND device_id = $2 FOR UPDATE',
+    'INSERT INTO sync_devices (club_id, device_id) VALUES ($1, $2) ON CONFLICT DO NOTHING', [clubId, deviceId]);
   return Number(row.last_seq);
 }
 

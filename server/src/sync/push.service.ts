@@ -57,13 +57,12 @@ export class PushService {
         results.push({ mutationId: m.mutationId, status: 'rejected', error: { code: 'not-found', message: NOT_FOUND } });
         continue;
       }
-      const before = club.records[m.recordId];
       // applyMutation replaces the record rather than changing it, so the old fields stay as they were.
-      const prevFields = before?.fields ?? {};
+      const before = club.records[m.recordId];
       const prevSeq = club.changeSeq;
       const result = applyMutation(ctx, m);
       results.push(result);
-      if (club.changeSeq > prevSeq) changes.push(changeEntry(club.records[m.recordId]!, prevFields, m, result));
+      if (club.changeSeq > prevSeq) changes.push(changeEntry(club.records[m.recordId]!, before?.fields, m, result));
     }
     await this.write(em, p.clubId, club, locked.lastSeq, changes);
     await saveDeviceSeq(em, p.clubId, deviceId, club.deviceSeq[deviceId] ?? deviceSeq, p.userId);
@@ -97,10 +96,16 @@ export class PushService {
   }
 }
 
-/** What one accepted mutation wrote, for the change log and the record's history. */
-function changeEntry(rec: StoredRecord, prev: Record<string, unknown>, m: Mutation, result: MutationResult): ChangeEntry {
-  const patch: Record<string, unknown> = {};
-  for (const k in rec.fields) if (!deepEqual(prev[k], rec.fields[k])) patch[k] = rec.fields[k];
+/**
+ * What one accepted mutation wrote, for the change log and the record's history: for a new
+ * record, all its fields (the very object, which the log then need not be sent twice).
+ */
+function changeEntry(rec: StoredRecord, prev: Record<string, unknown> | undefined, m: Mutation, result: MutationResult): ChangeEntry {
+  let patch: Record<string, unknown> = rec.fields;
+  if (prev) {
+    patch = {};
+    for (const k in rec.fields) if (!deepEqual(prev[k], rec.fields[k])) patch[k] = rec.fields[k];
+  }
   return {
     seq: rec.changeSeq, kind: rec.kind, recordId: rec.id, version: rec.version, mutationId: m.mutationId,
     deviceId: rec.lastActor.deviceId, userId: rec.lastActor.userId, hlc: m.hlc, patch, deleted: rec.deleted, status: result.status,

@@ -9,6 +9,12 @@ import { testPerson } from '@/test/test-person';
 import { PHONE_WIDTH, setViewportWidth } from '@/test/viewport';
 import { boatFields, memberFields, motorFields } from '../testing/records';
 
+/** Clicks a dialog's button once it is enabled (it waits for the day's sign-ons to be read). */
+async function clickEnabled(user: ReturnType<typeof userEvent.setup>, button: HTMLElement) {
+  await waitFor(() => expect(button).toBeEnabled(), { timeout: 10_000 });
+  await user.click(button);
+}
+
 /** The open dialog titled `title`; found by its text, since role queries over a whole page are slow in jsdom. */
 async function dialogTitled(title: string) {
   const heading = await screen.findByText(title, { selector: 'h2' }, { timeout: 10_000 });
@@ -42,7 +48,7 @@ describe('patrol on Today', () => {
     await user.click(card.getByRole('button', { name: 'Sign on to Tern' }));
     let dialog = await dialogTitled('Sign on to IRB 1 · Tern');
     expect(dialog.getByRole('status')).toHaveTextContent('IRB driver award current, no expiry.');
-    await user.click(dialog.getByRole('button', { name: 'Sign on' }));
+    await clickEnabled(user, dialog.getByRole('button', { name: 'Sign on' }));
     await waitFor(() => expect(card.getByRole('list', { name: 'Signed on today' })).toHaveTextContent('Driver: You'));
 
     await user.click(card.getByRole('button', { name: 'Sign on someone else' }));
@@ -51,7 +57,7 @@ describe('patrol on Today', () => {
     await user.click(await screen.findByRole('option', { name: 'Sam Whitcombe' }, { timeout: 10_000 }));
     await user.click(dialog.getByRole('button', { name: 'Crew' }));
     expect(dialog.getByRole('status')).toHaveTextContent(/^No current award for crew on \d{4}-\d\d-\d\d: IRB crew award expired on 2020-01-01\. Signing on anyway is the patrol captain's call\.$/);
-    await user.click(dialog.getByRole('button', { name: 'Sign on anyway' }));
+    await clickEnabled(user, dialog.getByRole('button', { name: 'Sign on anyway' }));
     await waitFor(() => expect(card.getByRole('list', { name: 'Signed on today' })).toHaveTextContent('Crew: Sam Whitcombe · no current award'));
 
     await user.click(card.getByRole('button', { name: 'Launch Tern' }));
@@ -77,13 +83,13 @@ describe('patrol on Today', () => {
     renderApp('/', session);
     const tern = within(await screen.findByRole('article', { name: 'IRB 1 · Tern' }, { timeout: 10_000 }));
     await user.click(await tern.findByRole('button', { name: 'Sign on to Tern' }, { timeout: 10_000 }));
-    await user.click((await dialogTitled('Sign on to IRB 1 · Tern')).getByRole('button', { name: 'Sign on' }));
+    await clickEnabled(user, (await dialogTitled('Sign on to IRB 1 · Tern')).getByRole('button', { name: 'Sign on' }));
     await waitFor(() => expect(tern.getByRole('list', { name: 'Signed on today' })).toHaveTextContent('Driver: You'));
     const skua = within(screen.getByRole('article', { name: 'IRB 2 · Skua' }));
     await user.click(skua.getByRole('button', { name: 'Sign on to Skua' }));
     const dialog = await dialogTitled('Sign on to IRB 2 · Skua');
-    expect(dialog.getByText('This signs you off IRB 1 · Tern first.')).toBeInTheDocument();
-    await user.click(dialog.getByRole('button', { name: 'Sign on' }));
+    expect(await dialog.findByText('This signs you off IRB 1 · Tern first.', {}, { timeout: 10_000 })).toBeInTheDocument();
+    await clickEnabled(user, dialog.getByRole('button', { name: 'Sign on' }));
     await waitFor(() => expect(skua.getByRole('list', { name: 'Signed on today' })).toHaveTextContent('Driver: You'));
     expect(tern.getByText('Nobody signed on today.')).toBeInTheDocument();
     const signOns = await listRecords(p.ctx.db, p.ctx.clubId, 'signOn');
