@@ -45,10 +45,9 @@ export async function writeChanges(
     for (const r of recs) written.add(r.fields);
   }
   parts.push('club_seq AS (UPDATE sync_club_state SET last_seq = $2 WHERE club_id = $1)');
-  let shared = false;
-  const columns = CHANGE_COLUMNS.map((c): InputColumn<ChangeEntry> => c.name !== 'patch' ? c : {
-    ...c, get: (e) => (written.has(e.patch) ? ((shared = true), undefined) : e.patch),
-  });
+  const shared = entries.some((e) => written.has(e.patch));
+  const columns = CHANGE_COLUMNS.map((c): InputColumn<ChangeEntry> =>
+    c.name === 'patch' ? { ...c, get: (e) => (written.has(e.patch) ? undefined : e.patch) } : c);
   const { exprs, from } = batchInput(entries, columns, params);
   const patch = columns.findIndex((c) => c.name === 'patch');
   let source = from;
