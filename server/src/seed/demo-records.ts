@@ -23,8 +23,8 @@ export async function seedDemoRecords(db: DataSource, clubId: string, people: De
     ['checkTemplate', demoId('template:stow'), DEFAULT_STOW_TEMPLATE],
     ...BOATS.map((b): [RecordKind, string, KindFields['boat']] => ['boat', b.id, b.fields]),
     ...motors(day(-20)).map((m): [RecordKind, string, KindFields['motor']] => ['motor', m.id, m.fields]),
-    ...demoChecks(people, day).map((c): [RecordKind, string, KindFields['check']] => ['check', c.id, c.fields]),
-    ...demoDefects(people, day).map((d): [RecordKind, string, KindFields['defect']] => ['defect', d.id, d.fields]),
+    ...demoChecks(people, day, now).map((c): [RecordKind, string, KindFields['check']] => ['check', c.id, c.fields]),
+    ...demoDefects(people, day, now).map((d): [RecordKind, string, KindFields['defect']] => ['defect', d.id, d.fields]),
     // Appended, never inserted: a mutation's seq is its place here, and a seeded database skips seqs it has seen.
     ...motorMoves(people, day).map((m): [RecordKind, string, KindFields['motorMove']] => ['motorMove', m.id, m.fields]),
     ...demoPatrol(people, now, GANNET_BAY, Object.fromEntries(motors(day(-20)).map((m) => [m.id, m.fields.hourMeter]))),
