@@ -55,6 +55,10 @@ export class JobsService implements OnModuleInit, OnApplicationShutdown {
     this.stopped = true;
     // Running jobs finish (or are retried later by another server); no new ones are taken.
     await this.boss.stop({ graceful: true, wait: true, timeout: 15_000 }).catch((e: Error) => this.log.warn(`Job queue stop: ${e.message}`));
+    // The queue's stop resolves before its own worker clean-up has finished: that clean-up checks
+    // every second whether each worker has stopped. Wait it out, so nothing of the queue still runs
+    // once the server has closed (a test process or a reloading server would find it half torn down).
+    if (this.workers.size > 0) await new Promise((resolve) => setTimeout(resolve, 1_200));
   }
 
   /** Creates the queue if needed and starts this server's worker for it. */
