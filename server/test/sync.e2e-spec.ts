@@ -41,6 +41,32 @@ describe('sync push and pull', () => {
     expect(gone.changes).toEqual([expect.objectContaining({ id, deleted: true, version: 3 })]);
   });
 
+  it('logs what each change wrote, a record made and changed in one batch included', async () => {
+    const phone = new TestDevice();
+    const [made, again, other] = [uuid(), uuid(), uuid()];
+    const fields = defectFields(boatId, crew.user.id);
+    const incident = incidentFields(crew.user.id);
+    const res = await push(crew.accessToken, phone.body([
+      phone.mutation('defect', made, fields),
+      phone.mutation('defect', again, fields),
+      phone.mutation('defect', again, { description: 'Strap gone', notes: [] }, { baseVersion: 1, base: { description: fields.description, notes: [] } }),
+      phone.mutation('incidentNote', other, incident),
+    ])).expect(200);
+    expect(res.body.results.map((r: { status: string }) => r.status)).toEqual(['applied', 'applied', 'applied', 'applied']);
+    const log: { record_id: string; kind: string; version: number; status: string; device_id: string; user_id: string; patch: unknown }[] =
+      await t.db.query('SELECT record_id, kind, version, status, device_id, user_id, patch FROM sync_changes WHERE record_id = ANY($1::uuid[]) ORDER BY seq', [[made, again, other]]);
+    const who = { device_id: phone.deviceId, user_id: crew.user.id, status: 'applied' };
+    expect(log).toEqual([
+      { ...who, record_id: made, kind: 'defect', version: 1, patch: fields },
+      { ...who, record_id: again, kind: 'defect', version: 1, patch: fields },
+      // Only what the edit changed: the unchanged notes are not part of it.
+      { ...who, record_id: again, kind: 'defect', version: 2, patch: { description: 'Strap gone' } },
+      { ...who, record_id: other, kind: 'incidentNote', version: 1, patch: incident },
+    ]);
+    const [row] = await t.db.query('SELECT version, description, field_stamps, club_id, updated_by, device_id FROM defects WHERE id = $1', [again]);
+    expect(row).toMatchObject({ version: 2, description: 'Strap gone', club_id: crew.activeClub.id, updated_by: crew.user.id, device_id: phone.deviceId });
+  });
+
   it('merges a stale edit of another field, and keeps both values of one field in a conflict', async () => {
     const a = new TestDevice();
     const b = new TestDevice();

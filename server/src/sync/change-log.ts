@@ -27,13 +27,15 @@ const CHANGE_COLUMNS: InputColumn<ChangeEntry>[] = [
  * log, as data-modifying parts of one WITH, and the club's change counter moved to `lastSeq`.
  * One statement is one trip to the database and one plan, however many kinds the batch touches.
  * A change whose patch is its record's fields as written (a new record) does not send them
- * twice: the log takes them from the records' input.
+ * twice: the log takes them from the records' input. `also` adds parts of the caller's own.
  */
 export async function writeChanges(
   em: EntityManager, clubId: string, records: Map<RecordKind, StoredRecord[]>, entries: ChangeEntry[], lastSeq: number,
+  also: ((params: unknown[]) => string)[] = [],
 ) {
   const params: unknown[] = [clubId, lastSeq];
-  const parts: string[] = [];
+  // Further parts of the same WITH (the pushing device's seq), each adding its own values.
+  const parts: string[] = also.map((part) => part(params));
   const inputs: string[] = [];
   const written = new Set<unknown>();
   for (const [kind, recs] of records) {

@@ -26,15 +26,32 @@ async function lockRow(em: EntityManager, select: string, insert: string, params
   return made;
 }
 
-export async function saveClubSeq(em: EntityManager, clubId: string, lastSeq: number) {
-  await em.query('UPDATE sync_club_state SET last_seq = $2 WHERE club_id = $1', [clubId, lastSeq]);
-}
-
 /** The device's last accepted seq, locked like the club (a device pushes one batch at a time). */
 export async function lockDevice(em: EntityManager, clubId: string, deviceId: string): Promise<number> {
   const row = await lockRow(em, 'SELECT last_seq FROM sync_devices WHERE club_id = $1 AND device_id = $2 FOR UPDATE',
     'INSERT INTO sync_devices (club_id, device_id) VALUES ($1, $2) ON CONFLICT DO NOTHING', [clubId, deviceId]);
   return Number(row.last_seq);
+}
+
+/**
+ * Both locks of a push, club first as everywhere, in one statement when the device has pushed
+ * before (the rows of a first push are made by lockClub and lockDevice).
+ */
+export async function lockClubAndDevice(em: EntityManager, clubId: string, deviceId: string): Promise<LockedClub & { deviceSeq: number }> {
+  const [row] = await em.query(
+    `SELECT c.last_seq, c.purged_through_seq, d.last_seq AS device_seq
+     FROM sync_club_state c JOIN sync_devices d ON d.club_id = c.club_id AND d.device_id = $2
+     WHERE c.club_id = $1 FOR UPDATE OF c, d`, [clubId, deviceId]);
+  if (row) return { lastSeq: Number(row.last_seq), purgedThroughSeq: Number(row.purged_through_seq), deviceSeq: Number(row.device_seq) };
+  const club = await lockClub(em, clubId);
+  return { ...club, deviceSeq: await lockDevice(em, clubId, deviceId) };
+}
+
+/** The device's new last seq, as a part of a WITH whose $1 is the club; its values are appended to `params`. */
+export function deviceSeqPart(params: unknown[], deviceId: string, lastSeq: number, userId: string): string {
+  params.push(deviceId, lastSeq, userId);
+  const [d, s, u] = [params.length - 2, params.length - 1, params.length];
+  return `device_seq AS (UPDATE sync_devices SET last_seq = $${s}, last_user_id = $${u}, last_push_at = now() WHERE club_id = $1 AND device_id = $${d})`;
 }
 
 export async function saveDeviceSeq(em: EntityManager, clubId: string, deviceId: string, lastSeq: number, userId: string) {

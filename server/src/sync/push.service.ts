@@ -8,7 +8,7 @@ import { AppError } from '../common/app-error.js';
 import type { Principal } from '../auth/principal.js';
 import { recordStore } from '../records/record-store.js';
 import { insertConflicts, writeChanges, type ChangeEntry } from './change-log.js';
-import { lockClub, lockDevice, saveClubSeq, saveDeviceSeq } from './club-lock.js';
+import { deviceSeqPart, lockClubAndDevice, saveDeviceSeq } from './club-lock.js';
 import { assertProtocol } from './sync-errors.js';
 
 const NOT_FOUND = 'This record is not on the server, so the change could not be saved.';
@@ -37,8 +37,8 @@ export class PushService {
   }
 
   private async pushInTransaction(em: EntityManager, p: Principal, deviceId: string, mutations: Mutation[]): Promise<PushResponse> {
-    const locked = await lockClub(em, p.clubId);
-    const deviceSeq = await lockDevice(em, p.clubId, deviceId);
+    const locked = await lockClubAndDevice(em, p.clubId, deviceId);
+    const { deviceSeq } = locked;
     // Duplicates are loaded too, so their answer carries the record's current version.
     const { records, foreign } = await this.loadTouched(em, p.clubId, mutations);
     const club: ClubState = { records, changeSeq: locked.lastSeq, deviceSeq: { [deviceId]: deviceSeq }, conflicts: [], purgedThrough: locked.purgedThroughSeq };
@@ -64,9 +64,16 @@ export class PushService {
       results.push(result);
       if (club.changeSeq > prevSeq) changes.push(changeEntry(club.records[m.recordId]!, before?.fields, m, result));
     }
-    await this.write(em, p.clubId, club, locked.lastSeq, changes);
-    await saveDeviceSeq(em, p.clubId, deviceId, club.deviceSeq[deviceId] ?? deviceSeq, p.userId);
-    return { results, lastSeq: club.deviceSeq[deviceId] ?? deviceSeq };
+    const lastSeq = club.deviceSeq[deviceId] ?? deviceSeq;
+    // Each trip to the database waits its turn for the processor on a busy machine: the device's
+    // seq goes with the changes when there are any.
+    if (changes.length) {
+      await this.write(em, p.clubId, club, locked.lastSeq, changes, [(params) => deviceSeqPart(params, deviceId, lastSeq, p.userId)]);
+    } else {
+      await this.write(em, p.clubId, club, locked.lastSeq, changes);
+      await saveDeviceSeq(em, p.clubId, deviceId, lastSeq, p.userId);
+    }
+    return { results, lastSeq };
   }
 
   /** The club's current records that the batch names; ids that belong to another club are set apart. */
@@ -84,14 +91,14 @@ export class PushService {
     return { records, foreign };
   }
 
-  private async write(em: EntityManager, clubId: string, club: ClubState, startSeq: number, changes: ChangeEntry[]) {
+  private async write(em: EntityManager, clubId: string, club: ClubState, startSeq: number, changes: ChangeEntry[], also: ((params: unknown[]) => string)[] = []) {
     if (club.changeSeq === startSeq && !club.conflicts.length) return;
     const changed = new Map<RecordKind, StoredRecord[]>();
     for (const r of Object.values(club.records)) {
       if (r.changeSeq > startSeq) (changed.get(r.kind) ?? changed.set(r.kind, []).get(r.kind)!).push(r);
     }
-    if (changes.length) await writeChanges(em, clubId, changed, changes, club.changeSeq);
-    else await saveClubSeq(em, clubId, club.changeSeq);
+    // The counter moves only with a change, so a batch of conflicts alone leaves it be.
+    if (changes.length) await writeChanges(em, clubId, changed, changes, club.changeSeq, also);
     await insertConflicts(em, club.conflicts);
   }
 }

@@ -30,8 +30,9 @@ const rejected = (m: Mutation, error: MutationError): MutationResult => ({ mutat
 /** Check, merge and write one mutation, as the real server does inside the batch transaction. */
 export function applyMutation(ctx: ApplyContext, m: Mutation): MutationResult {
   const { club, auth, pt } = ctx;
+  const hlc = decodeHlc(m.hlc);
   try {
-    assertNotAhead(decodeHlc(m.hlc), pt);
+    assertNotAhead(hlc, pt);
   } catch (e) {
     if (e instanceof ClockDriftError) return rejected(m, { code: 'clock-drift', message: e.message });
     throw e;
@@ -77,14 +78,15 @@ export function applyMutation(ctx: ApplyContext, m: Mutation): MutationResult {
     mutation: { base: m.base, patch: m.patch, hlc: m.hlc, deleted: m.deleted, actor },
     baseIsCurrent: stored !== undefined && stored.version === m.baseVersion,
   });
-  const fields = { ...(stored?.fields ?? {}), ...merge.apply };
+  // The merge hands back a new object, so a new record can keep it as its fields.
+  const fields = stored ? { ...stored.fields, ...merge.apply } : merge.apply;
   const changed = !stored || merge.deleted !== stored.deleted || !deepEqual(fields, stored.fields);
   if (changed && !merge.deleted) {
     const full = created?.ok && sameEntries(fields, m.patch) ? created : validateMerged(ctx, m, stored, fields, Object.keys(merge.apply));
     if (!full.ok) return rejected(m, { code: 'invalid', message: `After merging with newer changes: ${describeErrors(full.errors)}`, fields: full.errors });
     ctx.validated?.set(fields, full.value);
   }
-  ctx.clock.receive(decodeHlc(m.hlc), pt);
+  ctx.clock.receive(hlc, pt);
   let record = stored;
   if (changed) {
     club.changeSeq += 1;

@@ -94,7 +94,7 @@ export class MemorySyncServer {
 
   /**
    * Drop tombstones changed at or before `throughSeq`. The horizon moves to the newest change
-   * dropped, as on the real server; replicas that pulled below it before now must reset.
+   * dropped, as on the real server; a replica that pulled below it before the purge must start afresh.
    */
   purgeTombstones(clubId: string, throughSeq: number): number {
     const club = this.club(clubId);

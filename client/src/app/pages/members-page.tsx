@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
@@ -37,6 +37,8 @@ export function MembersPage() {
   const [step, setStep] = useState<Step>({ kind: 'list' });
   const [removing, setRemoving] = useState<DeviceMember | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
+  // The shed tablet may rest on this screen: it keeps sending every member's changes, as the shell does.
+  useEffect(() => syncRunner.start(), []);
 
   // Every cached answer was the previous member's; their changes go out with their own tokens.
   const switched = () => {
