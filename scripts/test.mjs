@@ -35,15 +35,15 @@ const vitest = (dir, config, report) => ['node_modules/vitest/vitest.mjs', 'run'
 const results = [];
 try {
   let r = join(reports, 'sync-protocol.json');
-  results.push(runSuite('sync-protocol (vitest)', 'node', vitest('sync-protocol', null, r), { cwd: repo, env: base, report: r }));
+  results.push(await runSuite('sync-protocol (vitest)', 'node', vitest('sync-protocol', null, r), { cwd: repo, env: base, report: r }));
   r = join(reports, 'client.json');
-  results.push(runSuite('client (vitest)', 'node', vitest(null, 'vite.config.ts', r), { cwd: repo, env: base, report: r }));
+  results.push(await runSuite('client (vitest)', 'node', vitest(null, 'vite.config.ts', r), { cwd: repo, env: base, report: r }));
   r = join(reports, 'server.json');
-  results.push(runSuite('server (jest, PostgreSQL)', 'node',
+  results.push(await runSuite('server (jest, PostgreSQL)', 'node',
     ['--experimental-vm-modules', '../node_modules/jest/bin/jest.js', '--runInBand', '--json', `--outputFile=${r}`],
     { cwd: join(repo, 'server'), env: { ...base, DATABASE_URL: pg.url, ...mailEnv }, report: r }));
   r = join(reports, 'browser.json');
-  results.push(runSuite('browser (Chromium, built app, real server)', 'node', vitest(null, 'client/e2e/vitest.e2e.config.ts', r),
+  results.push(await runSuite('browser (Chromium, built app, real server)', 'node', vitest(null, 'client/e2e/vitest.e2e.config.ts', r),
     { cwd: repo, env: { ...base, ...mailEnv, E2E_DATABASE_URL: pg.addDatabase('breakline_e2e'), E2E_S3_ENDPOINT: s3.endpoint, E2E_S3_BUCKET: s3.bucket }, report: r }));
 } finally {
   cleanup();
