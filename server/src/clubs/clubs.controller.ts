@@ -1,8 +1,9 @@
-import { Controller, Get, Param, ParseUUIDPipe } from '@nestjs/common';
+import { Body, Controller, Get, Param, ParseUUIDPipe, Patch } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
 import { CurrentPrincipal, MinRole, type Principal } from '../auth/principal.js';
 import { ClubsService } from './clubs.service.js';
 import type { ClubDto, MemberDto } from './dto/club.dto.js';
+import { ClubSettingsDto } from './dto/club-settings.dto.js';
 
 @ApiTags('clubs')
 @ApiBearerAuth()
@@ -13,6 +14,13 @@ export class ClubsController {
   @Get('clubs/current')
   current(@CurrentPrincipal() p: Principal): Promise<ClubDto> {
     return this.clubs.get(p, p.clubId);
+  }
+
+  /** Admins change the club's settings; phones pick them up with their next session refresh. */
+  @Patch('clubs/current')
+  @MinRole('admin')
+  update(@CurrentPrincipal() p: Principal, @Body() body: ClubSettingsDto): Promise<ClubDto> {
+    return this.clubs.update(p, body);
   }
 
   @Get('clubs/:id')

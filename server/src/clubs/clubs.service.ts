@@ -6,6 +6,7 @@ import type { Principal } from '../auth/principal.js';
 import { Club } from './club.entity.js';
 import { MembershipsService } from './memberships.service.js';
 import type { ClubDto, MemberDto } from './dto/club.dto.js';
+import type { ClubSettingsDto } from './dto/club-settings.dto.js';
 
 @Injectable()
 export class ClubsService {
@@ -20,6 +21,12 @@ export class ClubsService {
     const club = clubId === p.clubId ? await this.clubs.findOne({ where: { id: p.clubId } }) : null;
     if (!club) throw new AppError(404, 'not_found', 'No such club among yours.');
     return toClubDto(club);
+  }
+
+  async update(p: Principal, settings: ClubSettingsDto): Promise<ClubDto> {
+    const changes = Object.fromEntries(Object.entries(settings).filter(([, v]) => v !== undefined));
+    if (Object.keys(changes).length > 0) await this.clubs.update({ id: p.clubId }, changes);
+    return this.get(p, p.clubId);
   }
 
   async members(p: Principal): Promise<MemberDto[]> {
