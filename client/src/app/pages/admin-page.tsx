@@ -1,6 +1,7 @@
 import { canAdminister } from '@/features/auth/roles';
 import { useCaughtMailOn } from '@/features/admin/api/caught-mail';
 import { MembersScreen } from '@/features/admin/components/members-screen';
+import { ClubSettingsForm } from '@/features/admin/components/club-settings-form';
 import { PageHeader } from '@/components/page-header';
 import { DeskGate } from './desk-gate';
 
@@ -18,6 +19,7 @@ function Members() {
     <>
       <PageHeader title="Admin: members" subtitle="Invite people by e-mail, and choose each member's role in this club" />
       <MembersScreen showCaughtMail={caught} />
+      <ClubSettingsForm />
     </>
   );
 }
