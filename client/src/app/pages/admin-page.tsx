@@ -17,7 +17,7 @@ function Members() {
   const caught = useCaughtMailOn();
   return (
     <>
-      <PageHeader title="Admin: members" subtitle="Invite people by e-mail, and choose each member's role in this club" />
+      <PageHeader title="Admin" subtitle="Invite people by e-mail, choose each member's role, and set the club's time zone, beach and units" />
       <MembersScreen showCaughtMail={caught} />
       <ClubSettingsForm />
     </>
