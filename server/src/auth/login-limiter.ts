@@ -1,26 +1,15 @@
 import type { RequestHandler } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
-import type { ErrorBody } from '../common/app-error.js';
+import { addressEmailLimiter } from '../common/address-email-limiter.js';
 
 /**
  * Counts failed sign-ins per address and e-mail; successful ones do not count, so a crew that
  * shares the clubhouse Wi-Fi is not locked out by one person's typos.
  */
 export function loginLimiter(maxFailures: number, windowMinutes: number): RequestHandler {
-  return rateLimit({
-    windowMs: windowMinutes * 60_000,
-    limit: maxFailures,
-    skipSuccessfulRequests: true,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').trim().toLowerCase()}`,
-    handler: (_req, res) => {
-      const body: ErrorBody = {
-        statusCode: 429,
-        code: 'too_many_attempts',
-        message: `Too many failed sign-ins. Wait ${windowMinutes} minutes and try again, or ask your club admin to reset your password.`,
-      };
-      res.status(429).json(body);
-    },
+  return addressEmailLimiter({
+    max: maxFailures,
+    windowMinutes,
+    failuresOnly: true,
+    message: `Too many failed sign-ins. Wait ${windowMinutes} minutes and try again, or ask your club admin to reset your password.`,
   });
 }

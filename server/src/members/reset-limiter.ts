@@ -1,22 +1,11 @@
 import type { RequestHandler } from 'express';
-import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
-import type { ErrorBody } from '../common/app-error.js';
+import { addressEmailLimiter } from '../common/address-email-limiter.js';
 
 /** Every reset request counts, per address and e-mail, so nobody can flood an inbox from one place. */
 export function resetLimiter(max: number, windowMinutes: number): RequestHandler {
-  return rateLimit({
-    windowMs: windowMinutes * 60_000,
-    limit: max,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}|${String(req.body?.email ?? '').trim().toLowerCase()}`,
-    handler: (_req, res) => {
-      const body: ErrorBody = {
-        statusCode: 429,
-        code: 'too_many_attempts',
-        message: `Too many password link requests. Wait ${windowMinutes} minutes, and check your spam folder for the links already sent.`,
-      };
-      res.status(429).json(body);
-    },
+  return addressEmailLimiter({
+    max,
+    windowMinutes,
+    message: `Too many password link requests. Wait ${windowMinutes} minutes, and check your spam folder for the links already sent.`,
   });
 }

@@ -6,7 +6,7 @@ export interface SignInValues {
 export type SignInProblems = Partial<Record<keyof SignInValues, string>>;
 
 // Deliberately loose: the server decides who exists; this only catches typing slips.
-const emailShape = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
+export const emailShape = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
 export function validateSignIn({ email, password }: SignInValues): SignInProblems {
   const problems: SignInProblems = {};

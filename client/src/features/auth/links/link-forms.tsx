@@ -9,7 +9,8 @@ import Typography from '@mui/material/Typography';
 import { isApiError } from '@/lib/api-error';
 import { PasswordField } from '../components/password-field';
 import { useAcceptInvite, useConfirmPasswordReset, useRequestPasswordReset } from './api';
-import { newPasswordProblems } from './validate';
+import { MIN_PASSWORD_LENGTH, newPasswordProblems } from './validate';
+import { emailShape } from '../components/validate-sign-in';
 
 const OFFLINE = 'No connection to the Breakline server. This step needs the internet; try again on the clubhouse Wi-Fi.';
 
@@ -17,6 +18,40 @@ function errorText(error: unknown): string {
   if (isApiError(error, 'network_error')) return OFFLINE;
   if (error instanceof Error) return error.message;
   return 'That did not work. Try again.';
+}
+
+/** A password being chosen, typed twice. */
+function NewPasswordPair(props: {
+  labels: [string, string];
+  password: string;
+  repeat: string;
+  onPassword: (v: string) => void;
+  onRepeat: (v: string) => void;
+  problems: Record<string, string | undefined>;
+}) {
+  const { labels, problems } = props;
+  return (
+    <>
+      <PasswordField
+        label={labels[0]}
+        autoComplete="new-password"
+        value={props.password}
+        onChange={(e) => props.onPassword(e.target.value)}
+        error={Boolean(problems.password)}
+        helperText={problems.password ?? `At least ${MIN_PASSWORD_LENGTH} characters.`}
+        fullWidth
+      />
+      <PasswordField
+        label={labels[1]}
+        autoComplete="new-password"
+        value={props.repeat}
+        onChange={(e) => props.onRepeat(e.target.value)}
+        error={Boolean(problems.repeat)}
+        helperText={problems.repeat}
+        fullWidth
+      />
+    </>
+  );
 }
 
 /** Joining a club from an e-mailed invitation: a new account, or an existing one's password. */
@@ -62,24 +97,24 @@ export function AcceptInviteForm({ token, onDone }: { token: string; onDone: () 
           fullWidth
         />
       )}
-      <PasswordField
-        label={existing ? 'Your password' : 'Choose a password'}
-        autoComplete={existing ? 'current-password' : 'new-password'}
-        value={password}
-        onChange={(e) => setPassword(e.target.value)}
-        error={Boolean(problems.password)}
-        helperText={problems.password ?? (existing ? undefined : 'At least 10 characters.')}
-        fullWidth
-      />
-      {!existing && (
+      {existing ? (
         <PasswordField
-          label="Type the password again"
-          autoComplete="new-password"
-          value={repeat}
-          onChange={(e) => setRepeat(e.target.value)}
-          error={Boolean(problems.repeat)}
-          helperText={problems.repeat}
+          label="Your password"
+          autoComplete="current-password"
+          value={password}
+          onChange={(e) => setPassword(e.target.value)}
+          error={Boolean(problems.password)}
+          helperText={problems.password}
           fullWidth
+        />
+      ) : (
+        <NewPasswordPair
+          labels={['Choose a password', 'Type the password again']}
+          password={password}
+          repeat={repeat}
+          onPassword={setPassword}
+          onRepeat={setRepeat}
+          problems={problems}
         />
       )}
       <Button type="submit" variant="contained" size="large" disabled={accept.isPending}>
@@ -97,7 +132,7 @@ export function ForgotPasswordForm() {
   const submit = (event: FormEvent) => {
     event.preventDefault();
     const trimmed = email.trim();
-    if (!/^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(trimmed)) {
+    if (!emailShape.test(trimmed)) {
       setProblem('Enter an e-mail address like name@example.org.');
       return;
     }
@@ -154,24 +189,7 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
         Other phones and computers signed in as you will be asked to sign in again. Changes they hold are kept and sent
         once they do.
       </Typography>
-      <PasswordField
-        label="New password"
-        autoComplete="new-password"
-        value={password}
-        onChange={(e) => setPassword(e.target.value)}
-        error={Boolean(problems.password)}
-        helperText={problems.password ?? 'At least 10 characters.'}
-        fullWidth
-      />
-      <PasswordField
-        label="Type it again"
-        autoComplete="new-password"
-        value={repeat}
-        onChange={(e) => setRepeat(e.target.value)}
-        error={Boolean(problems.repeat)}
-        helperText={problems.repeat}
-        fullWidth
-      />
+      <NewPasswordPair labels={['New password', 'Type it again']} password={password} repeat={repeat} onPassword={setPassword} onRepeat={setRepeat} problems={problems} />
       <Button type="submit" variant="contained" size="large" disabled={confirm.isPending}>
         {confirm.isPending ? 'Saving…' : 'Save the new password'}
       </Button>
