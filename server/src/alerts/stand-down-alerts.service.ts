@@ -75,11 +75,19 @@ export class StandDownAlertsService implements OnApplicationBootstrap, OnApplica
        LEFT JOIN memberships rm ON rm.club_id = a.club_id AND rm.user_id = ${uid('d.reported_by')}
        LEFT JOIN users ru ON ru.id = rm.user_id
        ORDER BY a.created_at`);
+    // A batch often holds several alerts of one club: read each club's supervisors once.
+    const supervisorsOf = new Map<string, Promise<{ email: string }[]>>();
+    const supervisors = (clubId: string) => {
+      if (!supervisorsOf.has(clubId)) {
+        supervisorsOf.set(clubId, em.query(
+          `SELECT u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.club_id = $1 AND m.role IN ('supervisor', 'admin') ORDER BY u.email`, [clubId]));
+      }
+      return supervisorsOf.get(clubId)!;
+    };
     for (const a of alerts) {
       let sent = 0;
       if (a.description !== null && !a.deleted) {
-        const people: { email: string }[] = await em.query(
-          `SELECT u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.club_id = $1 AND m.role IN ('supervisor', 'admin') ORDER BY u.email`, [a.club_id]);
+        const people = await supervisors(a.club_id);
         const boat = [a.fleet_number, a.boat_name].filter(Boolean).join(' ') || 'A boat';
         for (const { email } of people) {
           const mailed = await this.mail.queueOrLog(standDownMail({
