@@ -5,6 +5,7 @@ import { JobsService } from '../jobs/jobs.service.js';
 import { MailService } from '../mail/mail.service.js';
 import { uid } from '../review/review-tables.js';
 import { lapsingDigest, lapsingMail, type LapsingAward } from './alert-texts.js';
+import { clubSupervisorEmails } from './club-supervisors.js';
 
 const QUEUE = 'awards.lapsing';
 
@@ -63,8 +64,7 @@ export class AwardRemindersService implements OnApplicationBootstrap {
       }
       for (const c of fresh) if (c.card.email) await this.mail.queueOrLog(lapsingMail(c.card.email, club.name, c.info), em);
       if (fresh.length) {
-        const supervisors: { email: string }[] = await em.query(
-          `SELECT u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.club_id = $1 AND m.role IN ('supervisor', 'admin') ORDER BY u.email`, [club.id]);
+        const supervisors = await clubSupervisorEmails(em, club.id);
         const list = fresh.map((c) => c.info).sort((a, b) => a.expiresOn.localeCompare(b.expiresOn) || a.holder.localeCompare(b.holder));
         for (const s of supervisors) await this.mail.queueOrLog(lapsingDigest(s.email, club.name, list), em);
       }

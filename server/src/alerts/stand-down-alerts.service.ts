@@ -5,6 +5,7 @@ import { MailService } from '../mail/mail.service.js';
 import { appUrl } from '../mail/app-url.js';
 import { uid } from '../review/review-tables.js';
 import { standDownMail } from './alert-texts.js';
+import { clubSupervisorEmails } from './club-supervisors.js';
 
 /** How often the unsent-alert index is looked at: a single index probe, so cheap to do often. */
 const POLL_MS = 2000;
@@ -79,8 +80,7 @@ export class StandDownAlertsService implements OnApplicationBootstrap, OnApplica
     const supervisorsOf = new Map<string, Promise<{ email: string }[]>>();
     const supervisors = (clubId: string) => {
       if (!supervisorsOf.has(clubId)) {
-        supervisorsOf.set(clubId, em.query(
-          `SELECT u.email FROM memberships m JOIN users u ON u.id = m.user_id WHERE m.club_id = $1 AND m.role IN ('supervisor', 'admin') ORDER BY u.email`, [clubId]));
+        supervisorsOf.set(clubId, clubSupervisorEmails(em, clubId));
       }
       return supervisorsOf.get(clubId)!;
     };
