@@ -4,7 +4,7 @@ import { uuid7 } from '@/db/uuid7';
 import { getRecord, listRecords } from '@/db/queries';
 import { createRecord, updateRecord } from '@/db/write';
 import { FakeBackend } from './test/fake-backend';
-import { defectFields, testDevice } from './test/device';
+import { defectFields, testDevice, twoPhonesWithOneDefect } from './test/device';
 
 describe('push and pull', () => {
   it('sends a change, then another phone pulls it; the outbox empties and versions move', async () => {
@@ -52,12 +52,7 @@ describe('push and pull', () => {
   });
 
   it('keeps a local edit on top when a pull brings another change to the record', async () => {
-    const backend = new FakeBackend();
-    const ana = testDevice(backend, 'member-ana');
-    const ben = testDevice(backend, 'member-ben');
-    const id = await createRecord(ana.writer, 'defect', defectFields());
-    await ana.sync();
-    await ben.sync();
+    const { backend, ana, ben, id } = await twoPhonesWithOneDefect();
     await updateRecord(ben.writer, 'defect', id, { actionTaken: 'Strap restitched' });
     await ben.sync();
     // Ana edits another field offline, then only pulls: her edit is still what she sees.

@@ -1,18 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { getRecord } from '@/db/queries';
-import { createRecord, updateRecord } from '@/db/write';
+import { updateRecord } from '@/db/write';
 import { readSyncStatus } from './status';
-import { FakeBackend } from './test/fake-backend';
-import { defectFields, testDevice } from './test/device';
+import { twoPhonesWithOneDefect } from './test/device';
 
 describe('two phones editing one field offline', () => {
   it('raise a conflict, and both end equal to the server after syncing', async () => {
-    const backend = new FakeBackend();
-    const ana = testDevice(backend, 'member-ana');
-    const ben = testDevice(backend, 'member-ben');
-    const id = await createRecord(ana.writer, 'defect', defectFields());
-    await ana.sync();
-    await ben.sync();
+    const { backend, ana, ben, id } = await twoPhonesWithOneDefect();
 
     await updateRecord(ana.writer, 'defect', id, { description: 'Starboard handle strap torn through' });
     backend.now += 1_000;
@@ -40,12 +34,7 @@ describe('two phones editing one field offline', () => {
   });
 
   it('merge changes to different fields without a conflict', async () => {
-    const backend = new FakeBackend();
-    const ana = testDevice(backend, 'member-ana');
-    const ben = testDevice(backend, 'member-ben');
-    const id = await createRecord(ana.writer, 'defect', defectFields());
-    await ana.sync();
-    await ben.sync();
+    const { backend, ana, ben, id } = await twoPhonesWithOneDefect();
     await updateRecord(ana.writer, 'defect', id, { severity: 'stand-down' });
     await updateRecord(ben.writer, 'defect', id, { actionTaken: 'Spare strap fitted' });
     await ana.sync();

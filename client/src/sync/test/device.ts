@@ -1,9 +1,9 @@
 import type { KindFields, Role } from '@breakline/sync-protocol';
 import { ReplicaDb } from '@/db/schema';
-import type { WriteContext } from '@/db/write';
+import { createRecord, type WriteContext } from '@/db/write';
 import type { SyncAuth, SyncScope } from '../auth-source';
 import { syncOnce, type SyncContext } from '../engine';
-import type { FakeBackend } from './fake-backend';
+import { FakeBackend } from './fake-backend';
 
 let dbCount = 0;
 
@@ -83,4 +83,15 @@ export function boatFields(overrides: Partial<KindFields['boat']> = {}): KindFie
     inService: true,
     ...overrides,
   };
+}
+
+/** Two members' phones on one backend, both holding the same synced defect. */
+export async function twoPhonesWithOneDefect() {
+  const backend = new FakeBackend();
+  const ana = testDevice(backend, 'member-ana');
+  const ben = testDevice(backend, 'member-ben');
+  const id = await createRecord(ana.writer, 'defect', defectFields());
+  await ana.sync();
+  await ben.sync();
+  return { backend, ana, ben, id };
 }
