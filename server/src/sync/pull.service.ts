@@ -1,22 +1,27 @@
 import { Injectable } from '@nestjs/common';
 import { DataSource } from 'typeorm';
 import {
-  canSee, formatCheckpoint, needsFreshStart, parseCheckpoint, PullQuerySchema, toWire, type PullResponse, type StoredRecord,
+  formatCheckpoint, needsFreshStart, parseCheckpoint, PullQuerySchema, type PullResponse,
 } from '@breakline/sync-protocol';
 import { AppError } from '../common/app-error.js';
 import type { Principal } from '../auth/principal.js';
 import { recordStore } from '../records/record-store.js';
+import { mayReceive, type WireRow } from '../records/wire-rows.js';
 
 /**
  * Pull: the club's records changed after a checkpoint, oldest change first, that the caller may
  * see. Checkpoints carry the purge horizon they were given under, so a fresh start below the
  * horizon goes on page after page while a replica from before the purge is sent back to the start.
+ *
+ * The answer is JSON text, a PullResponse, put together from records PostgreSQL wrote as JSON:
+ * a page of a thousand checks is over a megabyte, and parsing it only to write it out again
+ * took most of a pull's time.
  */
 @Injectable()
 export class PullService {
   constructor(private readonly db: DataSource) {}
 
-  async pull(p: Principal, query: Record<string, unknown>): Promise<PullResponse> {
+  async pull(p: Principal, query: Record<string, unknown>): Promise<string> {
     const q = PullQuerySchema.safeParse(query);
     if (!q.success) {
       const details = q.error.issues.map((i) => ({ field: i.path.join('.') || 'query', message: i.message }));
@@ -30,18 +35,18 @@ export class PullService {
       const [state] = await em.query('SELECT last_seq, purged_through_seq FROM sync_club_state WHERE club_id = $1', [p.clubId]);
       const horizon = Number(state?.purged_through_seq ?? 0);
       if (needsFreshStart(since, horizon)) {
-        return { changes: [], checkpoint: formatCheckpoint({ horizon, seq: Number(state?.last_seq ?? 0) }), hasMore: false, resetRequired: true };
+        const reset: PullResponse = { changes: [], checkpoint: formatCheckpoint({ horizon, seq: Number(state?.last_seq ?? 0) }), hasMore: false, resetRequired: true };
+        return JSON.stringify(reset);
       }
-      const rows = await recordStore.changedAfter(em, p.clubId, since.seq, limit);
-      return this.page(p, rows, limit, horizon, since.seq);
+      const { rows, hasMore } = await recordStore.changedPage(em, p.clubId, since.seq, limit);
+      return this.page(p, rows, hasMore, horizon, since.seq);
     });
   }
 
-  private page(p: Principal, rows: StoredRecord[], limit: number, horizon: number, sinceSeq: number): PullResponse {
-    const page = rows.slice(0, limit);
+  private page(p: Principal, rows: WireRow[], hasMore: boolean, horizon: number, sinceSeq: number): string {
     // Records the caller may not see still move the checkpoint on, so they are never asked for again.
-    const changes = page.filter((r) => canSee(r.kind, p.role, r.fields, p.userId)).map(toWire);
-    const seq = page.length ? page[page.length - 1]!.changeSeq : sinceSeq;
-    return { changes, checkpoint: formatCheckpoint({ horizon, seq }), hasMore: rows.length > limit };
+    const shown = rows.filter((r) => mayReceive(r, p.role, p.userId)).map((r) => r.json);
+    const seq = rows.length ? rows[rows.length - 1]!.changeSeq : sinceSeq;
+    return `{"changes":[${shown.join(',')}],"checkpoint":${JSON.stringify(formatCheckpoint({ horizon, seq }))},"hasMore":${hasMore}}`;
   }
 }

@@ -1,6 +1,6 @@
-import { Body, Controller, Get, HttpCode, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Header, HttpCode, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import type { ConflictRecord, PullResponse, PushResponse } from '@breakline/sync-protocol';
+import type { ConflictRecord, PushResponse } from '@breakline/sync-protocol';
 import { CurrentPrincipal, MinRole, type Principal } from '../auth/principal.js';
 import { PushService } from './push.service.js';
 import { PullService } from './pull.service.js';
@@ -20,8 +20,10 @@ export class SyncController {
     return this.pushes.push(p, body);
   }
 
+  /** A PullResponse, sent as the JSON text the service put together. */
   @Get('pull')
-  pull(@CurrentPrincipal() p: Principal, @Query(RawBody) query: Record<string, unknown>): Promise<PullResponse> {
+  @Header('Content-Type', 'application/json; charset=utf-8')
+  pull(@CurrentPrincipal() p: Principal, @Query(RawBody) query: Record<string, unknown>): Promise<string> {
     return this.pulls.pull(p, query);
   }
 
