@@ -129,6 +129,16 @@ describe('sync push and pull', () => {
     expect(theirs.changes.some((c) => c.id === id)).toBe(false);
   });
 
+  it('sends a pull compressed to a phone that accepts it, and the same records to one that does not', async () => {
+    const zipped = await pull(crew.accessToken, '?limit=1000').set('accept-encoding', 'gzip').expect(200);
+    expect(zipped.headers['content-encoding']).toBe('gzip');
+    expect(zipped.headers['content-type']).toMatch(/^application\/json/);
+    const plain = await pull(crew.accessToken, '?limit=1000').set('accept-encoding', 'identity').expect(200);
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(zipped.body).toEqual(plain.body);
+    expect(plain.body.changes.length).toBeGreaterThan(10);
+  });
+
   it('pages a pull with hasMore and a checkpoint, oldest first', async () => {
     const phone = new TestDevice();
     const ids = Array.from({ length: 7 }, () => uuid());
