@@ -35,13 +35,20 @@ async function finishPull(db: ReplicaDb, clubId: string, sweepBelow: number | un
  * Writes one page with bulkPut and moves the checkpoint in the same transaction, so a page is
  * either all in with its checkpoint or not at all. Queued edits are laid on top of each pulled
  * copy before it is written, so a screen never sees the edit disappear and come back.
+ *
+ * A pulled copy older than the one held is not written over it. `fromEmpty` says the pull began
+ * with no record of the club on this phone and no checkpoint: every server copy held was then
+ * written by an earlier page of this same pull, from an older change, so there is nothing to
+ * compare with and the held rows are not read (on a first sync that read was a fifth of the time).
  */
-export async function applyPullPage(db: ReplicaDb, clubId: string, page: PullResponse, now: number): Promise<void> {
+export async function applyPullPage(
+  db: ReplicaDb, clubId: string, page: PullResponse, now: number, { fromEmpty = false }: { fromEmpty?: boolean } = {},
+): Promise<void> {
   await db.transaction('rw', db.records, db.outbox, db.syncState, async () => {
     const state = await loadClubState(db, clubId);
     const changes = page.changes.filter((c) => c.clubId === clubId);
     const ids = changes.map((c) => c.id);
-    const existing = await db.records.bulkGet(ids);
+    const existing = fromEmpty ? [] : await db.records.bulkGet(ids);
     const entries = await db.outbox.where('recordId').anyOf(ids).toArray();
     const rows: RecordRow[] = [];
     const done: OutboxRow[] = [];

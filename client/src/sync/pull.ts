@@ -1,4 +1,5 @@
 import type { PullResponse } from '@breakline/sync-protocol';
+import { clubRows } from '@/db/queries';
 import { loadClubState, updateClubState } from '@/db/replica-state';
 import type { ReplicaDb } from '@/db/schema';
 import { ApiError } from '@/lib/api-error';
@@ -56,6 +57,8 @@ export async function pullAll(ctx: PullContext): Promise<void> {
   let resets = 0;
   let since = (await loadClubState(db, scope.clubId)).checkpoint;
   let next = ask(since);
+  // A first sync: no checkpoint and nothing of the club here yet (see applyPullPage).
+  let fromEmpty = since === undefined && (await clubRows(db, scope.clubId).count()) === 0;
   for (;;) {
     const page = await next;
     if (page.resetRequired) {
@@ -63,6 +66,7 @@ export async function pullAll(ctx: PullContext): Promise<void> {
       if (since === undefined || ++resets > 1) throw new ApiError(200, 'bad_response', RESET_LOOP);
       await startReset(db, scope.clubId);
       since = undefined;
+      fromEmpty = false;
       next = ask(since);
       continue;
     }
@@ -72,7 +76,7 @@ export async function pullAll(ctx: PullContext): Promise<void> {
       // Should writing this page fail, the answer to the early request is dropped unread.
       next.catch(() => undefined);
     }
-    await applyPullPage(db, scope.clubId, page, ctx.now());
+    await applyPullPage(db, scope.clubId, page, ctx.now(), { fromEmpty });
     received += page.changes.length;
     ctx.onProgress?.({ phase: 'receiving', done: received, more: page.hasMore });
     if (!page.hasMore) return;

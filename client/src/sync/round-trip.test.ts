@@ -105,4 +105,35 @@ describe('push and pull', () => {
     expect(await ana.db.outbox.count()).toBe(0);
     expect(await getRecord(ana.db, ana.scope.clubId, 'defect', id)).toMatchObject({ version: 2, fields: { severity: 'stand-down' } });
   });
+
+  it("fills an empty phone page by page while others change records: newest copies win, the phone's own edit stays on top", async () => {
+    const backend = new FakeBackend();
+    const ben = testDevice(backend, 'member-ben');
+    const ids: string[] = [];
+    for (let i = 0; i < 5; i++) ids.push(await createRecord(ben.writer, 'defect', defectFields({ description: `Scuff ${i} on the hull` })));
+    await ben.sync();
+    const ana = testDevice(backend, 'member-ana');
+    // Ana's first sync, two records a page: when its first page arrives, Ben changes a record of
+    // that page, so a later page brings a newer copy over one this pull wrote; when its third
+    // arrives (the first is written by then), Ana edits the other record of the first page.
+    let pulls = 0;
+    const mid = async (input: RequestInfo | URL, init?: RequestInit) => {
+      const response = await backend.fetch(input, init);
+      if (!String(input).includes('/api/sync/pull')) return response;
+      pulls += 1;
+      if (pulls === 1) {
+        await updateRecord(ben.writer, 'defect', ids[0]!, { actionTaken: 'Patched and re-glued' });
+        await ben.sync();
+      }
+      if (pulls === 3) await updateRecord(ana.writer, 'defect', ids[1]!, { severity: 'stand-down' });
+      return response;
+    };
+    const { pullAll } = await import('./pull');
+    await pullAll({ db: ana.db, scope: ana.scope, auth: ana.auth, fetch: mid, now: () => backend.now, pageSize: 2 });
+    expect(pulls).toBe(3);
+    const shown = await listRecords(ana.db, ana.scope.clubId, 'defect');
+    expect(shown).toHaveLength(5);
+    expect(shown.find((r) => r.id === ids[0])).toMatchObject({ version: 2, fields: { actionTaken: 'Patched and re-glued' } });
+    expect(shown.find((r) => r.id === ids[1])).toMatchObject({ version: 1, waiting: 1, fields: { severity: 'stand-down' } });
+  });
 });
