@@ -30,6 +30,15 @@ describe('club settings', () => {
     expect(after).toEqual(before);
   });
 
+  it('answers a club name holding the NUL character with what to do, and keeps the old name', async () => {
+    const admin = await login(t, 'admin@gannetbay.example');
+    const before = (await t.http().get('/api/clubs/current').set('authorization', `Bearer ${admin.accessToken}`)).body;
+    const res = await patch(admin.accessToken, { name: 'Gannet\u0000 Bay' }).expect(400);
+    expect(res.body).toMatchObject({ code: 'validation_failed', message: expect.stringMatching(/control character \(NUL\).*retype/) });
+    const after = (await t.http().get('/api/clubs/current').set('authorization', `Bearer ${admin.accessToken}`)).body;
+    expect(after.name).toBe(before.name);
+  });
+
   it('refuses a supervisor', async () => {
     const captain = await login(t, 'captain@gannetbay.example');
     const res = await patch(captain.accessToken, { awardCheck: 'warn' }).expect(403);

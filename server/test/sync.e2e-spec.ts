@@ -115,6 +115,16 @@ describe('sync push and pull', () => {
     expect(res.body.lastSeq).toBe(3);
   });
 
+  it('rejects text holding the NUL character alone, with a message, and saves the rest of the push', async () => {
+    const phone = new TestDevice();
+    const res = await push(crew.accessToken, phone.body([
+      phone.mutation('defect', uuid(), defectFields(boatId, crew.user.id, { description: 'Pontoon\u0000 scuffed' })),
+      phone.mutation('defect', uuid(), defectFields(boatId, crew.user.id)),
+    ])).expect(200);
+    expect(res.body.results[0]).toMatchObject({ status: 'rejected', error: { code: 'invalid', message: expect.stringMatching(/control character \(NUL\)/) } });
+    expect(res.body.results[1]).toMatchObject({ status: 'applied', version: 1 });
+  });
+
   it('refuses a record id that belongs to another club as if it did not exist', async () => {
     const phone = new TestDevice();
     const id = uuid();

@@ -2,6 +2,7 @@ import type { z } from 'zod';
 import { kindSpec, isRecordKind, RECORD_KINDS, type KindFields, type RecordKind } from './kinds.js';
 import type { FieldError } from './kinds/spec.js';
 import { predicateFor, toFieldErrors } from './issues.js';
+import { fieldLabel } from './field-labels.js';
 
 export type Validation<T> = { ok: true; value: T } | { ok: false; errors: FieldError[] };
 
@@ -14,6 +15,29 @@ function unknownKind(kind: unknown): Validation<never> {
 
 function notAnObject(value: unknown): boolean {
   return typeof value !== 'object' || value === null || Array.isArray(value);
+}
+
+/**
+ * The path to the first text (a value or a key, at any depth) holding the NUL character, which
+ * PostgreSQL cannot store in text or JSON; undefined when there is none. Nothing a person types
+ * holds one, so a change with it is refused here, on the phone and on the server alike, rather
+ * than failing the whole push when it is written.
+ */
+function nulAt(value: unknown, path: string[] = []): string[] | undefined {
+  if (typeof value === 'string') return value.includes('\u0000') ? path : undefined;
+  if (typeof value !== 'object' || value === null) return undefined;
+  for (const [k, v] of Object.entries(value)) {
+    if (k.includes('\u0000')) return [...path, k];
+    const found = nulAt(v, [...path, k]);
+    if (found) return found;
+  }
+  return undefined;
+}
+
+function nulRefused(value: unknown): Validation<never> | undefined {
+  const at = nulAt(value);
+  if (!at) return undefined;
+  return { ok: false, errors: [{ field: at.join('.'), message: `${at[0] ? `The ${fieldLabel([at[0]])}` : 'This text'} holds an invisible control character (NUL) that cannot be saved; retype it or paste it again as plain text.` }] };
 }
 
 /** The zod schema of a whole record's fields (strict: unknown fields are refused). */
@@ -33,6 +57,8 @@ export function patchSchema(kind: RecordKind): z.ZodType {
 export function validatePatch<K extends RecordKind>(kind: K, patch: unknown): Validation<Partial<KindFields[K]>> {
   if (!isRecordKind(kind)) return unknownKind(kind);
   if (notAnObject(patch)) return { ok: false, errors: [{ field: '', message: 'A change must be a group of fields.' }] };
+  const nul = nulRefused(patch);
+  if (nul) return nul;
   const spec = kindSpec(kind);
   const r = patchSchema(kind).safeParse(patch, { error: predicateFor });
   if (!r.success) return { ok: false, errors: toFieldErrors(r.error.issues, spec.label) };
@@ -43,6 +69,8 @@ export function validatePatch<K extends RecordKind>(kind: K, patch: unknown): Va
 export function validateRecord<K extends RecordKind>(kind: K, fields: unknown): Validation<KindFields[K]> {
   if (!isRecordKind(kind)) return unknownKind(kind);
   if (notAnObject(fields)) return { ok: false, errors: [{ field: '', message: 'A record must be a group of fields.' }] };
+  const nul = nulRefused(fields);
+  if (nul) return nul;
   const spec = kindSpec(kind);
   const r = spec.schema.safeParse(fields, { error: predicateFor });
   if (!r.success) return { ok: false, errors: toFieldErrors(r.error.issues, spec.label) };
@@ -65,7 +93,7 @@ type FieldSchemas = Record<string, z.ZodType>;
  * of a refused patch, ask validatePatch.
  */
 export function patchIsValid(kind: RecordKind, patch: unknown): boolean {
-  if (!isRecordKind(kind) || notAnObject(patch)) return false;
+  if (!isRecordKind(kind) || notAnObject(patch) || nulAt(patch)) return false;
   const shape = (patchSchema(kind) as unknown as { shape: FieldSchemas }).shape;
   for (const k of Object.keys(patch as object)) {
     if (!hasOwn(shape, k) || !shape[k]!.safeParse((patch as Record<string, unknown>)[k]).success) return false;
@@ -86,7 +114,7 @@ export function validateChangedRecord<K extends RecordKind>(
   const shape = spec.schema.shape as FieldSchemas;
   const value: Record<string, unknown> = { ...known };
   for (const k of changed) {
-    const r = hasOwn(shape, k) ? shape[k]!.safeParse(fields[k]) : undefined;
+    const r = hasOwn(shape, k) && !nulAt(fields[k]) ? shape[k]!.safeParse(fields[k]) : undefined;
     if (!r?.success) return validateRecord(kind, fields);
     if (r.data === undefined) delete value[k];
     else value[k] = r.data;

@@ -21,6 +21,21 @@ describe('record validation', () => {
     expect(errorsOf(r)[0]!.message).toMatch(/has no field "(clubId|colour)"; remove it\./);
   });
 
+  it('refuses text holding the NUL character, in a value or a key at any depth, naming the field', () => {
+    // PostgreSQL stores neither text nor JSON with U+0000 (its documentation on character types).
+    const inDescription = validatePatch('defect', { description: 'Strap\u0000 frayed' });
+    expect(errorsOf(inDescription)).toEqual([{
+      field: 'description',
+      message: 'The description holds an invisible control character (NUL) that cannot be saved; retype it or paste it again as plain text.',
+    }]);
+    expect(patchIsValid('defect', { description: 'Strap\u0000 frayed' })).toBe(false);
+    const check = FIXTURES.check as Record<string, unknown>;
+    const nested = { ...check, results: { hull: { outcome: 'fail', note: 'Split\u0000seam' } } };
+    expect(errorsOf(validateRecord('check', nested))[0]!.field).toBe('results.hull.note');
+    expect(errorsOf(validatePatch('check', { results: { 'hu\u0000ll': { outcome: 'pass' } } }))[0]!.field).toBe('results.hu\u0000ll');
+    expect(validatePatch('defect', { description: 'Strap frayed near the bow' }).ok).toBe(true);
+  });
+
   it('names the missing fields of a whole record', () => {
     const { description: _d, ...rest } = FIXTURES.defect;
     expect(errorsOf(validateRecord('defect', rest))).toEqual([{ field: 'description', message: 'Description is required.' }]);

@@ -32,6 +32,12 @@ export class ErrorFilter implements ExceptionFilter {
       const message = PLAIN[status] ?? (typeof msg === 'string' ? msg : err.message);
       return { statusCode: status, code: CODE_BY_STATUS[status] ?? 'internal_error', message };
     }
+    // PostgreSQL refuses the NUL character in text (22021) and in JSON (22P05); the sync rules
+    // refuse it before it gets here, and any other form's text is answered the same way.
+    const pgCode = (err as { code?: unknown }).code;
+    if (pgCode === '22021' || pgCode === '22P05') {
+      return { statusCode: 400, code: 'validation_failed', message: 'Some text holds an invisible control character (NUL) that cannot be saved; retype it or paste it again as plain text.' };
+    }
     const { status, limit } = err as { status?: number; limit?: number };
     if (status === 413) return this.tooLarge(limit);
     if (status === 415) return { statusCode: 415, code: 'unsupported_media_type', message: 'The request body is in an encoding the server does not accept; send JSON, plain or gzip.' };
