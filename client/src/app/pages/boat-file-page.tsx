@@ -1,14 +1,13 @@
 import { useParams } from 'react-router-dom';
 import { useRecord } from '@/db/hooks';
 import { BoatFile } from '@/features/boats/components/boat-file';
-import { RecentChecks } from '@/features/checks/components/recent-checks';
 import { BoatDefects } from '@/features/defects/components/boat-defects';
 import { BoatLog } from '@/features/patrol/components/boat-log';
 
-/** The boat file, with the defects, checks and patrol features' parts in their places. */
+/** The boat file, with the defects and patrol features' parts in their places. */
 export function BoatFilePage() {
   const { boatId = '' } = useParams();
   const boat = useRecord('boat', boatId);
   const name = boat?.fields.name ?? 'this boat';
-  return <BoatFile boatId={boatId} defects={<BoatDefects boatId={boatId} boatName={name} />} checks={<RecentChecks boatId={boatId} />} log={<BoatLog boatId={boatId} />} />;
+  return <BoatFile boatId={boatId} defects={<BoatDefects boatId={boatId} boatName={name} />} log={<BoatLog boatId={boatId} />} />;
 }

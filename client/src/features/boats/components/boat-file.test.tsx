@@ -27,6 +27,10 @@ describe('the boat file', () => {
     const defects = within(await screen.findByRole('region', { name: 'Defects' }));
     expect(defects.getByText('Open defects (1)')).toBeInTheDocument();
     expect(defects.getByText(/Action taken .*Seam re-glued and left to cure 24 h/)).toBeInTheDocument();
-    expect(await screen.findByRole('region', { name: 'Recent checks' })).toHaveTextContent('No checks of this boat on this phone yet.');
+    // The history is one log (checks among the rest), not a second list of checks beside it.
+    const log = within(await screen.findByRole('region', { name: 'Boat log' }));
+    expect(log.getByText(/Defect reported/)).toBeInTheDocument();
+    expect(log.getByText('Repair')).toBeInTheDocument();
+    expect(screen.queryByRole('region', { name: 'Recent checks' })).not.toBeInTheDocument();
   }, 20_000);
 });

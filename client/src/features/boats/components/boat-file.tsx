@@ -18,10 +18,11 @@ import { MotorSummary } from './motor-summary';
 import { SectionCard } from './section-card';
 
 /**
- * One boat's page: what the next crew reads when signing on. `defects`, `checks` and `log` (the
- * boat's whole history) are the other features' parts, placed here by the page.
+ * One boat's page: what the next crew reads when signing on. `defects` and `log` (the boat's
+ * whole history: checks, trips, incidents, defects, repairs, services, motor moves) are the other
+ * features' parts, placed here by the page.
  */
-export function BoatFile(props: { boatId: string; defects: ReactNode; checks: ReactNode; log?: ReactNode }) {
+export function BoatFile(props: { boatId: string; defects: ReactNode; log?: ReactNode }) {
   const fleet = useFleetRecords();
   const ctx = useReadinessContext();
   const { activeClub } = useSession();
@@ -53,7 +54,6 @@ export function BoatFile(props: { boatId: string; defects: ReactNode; checks: Re
           <Typography sx={{ whiteSpace: 'pre-wrap' }}>{b.notes}</Typography>
         </SectionCard>
       )}
-      {props.checks}
       {props.log}
       <Button component={RouterLink} to={paths.boatEdit.href(boat.id)} variant="outlined" size="large">
         {editor ? 'Edit this boat' : 'Boat specification'}
