@@ -115,6 +115,14 @@ describe('sync push and pull', () => {
     expect(res.body.lastSeq).toBe(3);
   });
 
+  it("refuses a defect a crew member reports in someone else's name, and takes it from a supervisor", async () => {
+    const phone = new TestDevice();
+    const forged = await push(crew.accessToken, phone.body([phone.mutation('defect', uuid(), defectFields(boatId, captain.user.id))])).expect(200);
+    expect(forged.body.results[0]).toMatchObject({ status: 'rejected', error: { code: 'forbidden', message: 'You may only enter a defect in your own name (reported by); a supervisor may enter one for someone else.' } });
+    const entered = await push(captain.accessToken, phone.body([phone.mutation('defect', uuid(), defectFields(boatId, crew.user.id))])).expect(200);
+    expect(entered.body.results[0]).toMatchObject({ status: 'applied' });
+  });
+
   it('rejects text holding the NUL character alone, with a message, and saves the rest of the push', async () => {
     const phone = new TestDevice();
     const res = await push(crew.accessToken, phone.body([

@@ -51,7 +51,16 @@ export function checkCreate(kind: RecordKind, role: Role, fields?: Fields, userI
   if (access.ownerField && userId !== undefined && !roleAtLeast(role, access.update) && fields[access.ownerField] !== userId) {
     return no(`You may only write ${spec.label} in your own name.`);
   }
-  return OK;
+  return notSelf(kind, role, Object.entries(fields), userId) ?? OK;
+}
+
+/** A refusal when a member below supervisor names someone else in one of the kind's selfFields. */
+function notSelf(kind: RecordKind, role: Role, changes: readonly [string, unknown][], userId: string | undefined): Decision | undefined {
+  const spec = kindSpec(kind);
+  const own = spec.access.selfFields;
+  if (!own || userId === undefined || roleAtLeast(role, 'supervisor')) return undefined;
+  const other = changes.find(([field, value]) => own.includes(field) && value !== null && value !== undefined && value !== userId);
+  return other ? no(`You may only enter ${spec.label} in your own name (${fieldLabel([other[0]])}); a supervisor may enter one for someone else.`) : undefined;
 }
 
 /**
@@ -74,6 +83,8 @@ export function checkUpdate(kind: RecordKind, role: Role, patch: Fields, current
     const min = rule?.minRole ?? access.update;
     if (!roleAtLeast(role, min)) return refusal(min, rule, field, value, spec.label);
   }
+  const forged = notSelf(kind, role, changes, userId);
+  if (forged) return forged;
   const reason = spec.updateCheck?.({ role, patch, current });
   return reason ? no(reason) : OK;
 }

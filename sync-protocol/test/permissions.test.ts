@@ -34,6 +34,28 @@ describe('who may create', () => {
   });
 });
 
+describe('records in a member\'s own name', () => {
+  // Who did a check, reported a defect, moved a motor or signed off a day is the member writing
+  // it; only a supervisor enters one for someone else (a paper check typed in afterwards).
+  const cases: [RecordKind, string][] = [['check', 'performedBy'], ['defect', 'reportedBy'], ['motorMove', 'movedBy'], ['daySignOff', 'signedOffBy']];
+  it.each(cases)('takes a %s with the writer in %s, and refuses another member\'s name below supervisor', (kind, field) => {
+    const fields = { ...(FIXTURES[kind] as Record<string, unknown>), [field]: 'member-ana' };
+    expect(checkCreate(kind, 'driver', fields, 'member-ana')).toEqual({ ok: true });
+    const forged = checkCreate(kind, 'driver', fields, 'member-ben');
+    expect(forged.ok).toBe(false);
+    expect(!forged.ok && forged.reason).toMatch(/^You may only enter .+ in your own name \(.+\); a supervisor may enter one for someone else\.$/);
+    expect(checkCreate(kind, 'supervisor', fields, 'member-ben')).toEqual({ ok: true });
+  });
+
+  it('lets a supervisor sign off a check done by someone else, and a driver sign off a day only as themself', () => {
+    const check = { ...FIXTURES.check, performedBy: 'member-ana' };
+    expect(checkUpdate('check', 'supervisor', { signedOffBy: 'member-cy' }, check, 'member-cy').ok).toBe(true);
+    const day = { ...FIXTURES.daySignOff, signedOffBy: 'member-ana' };
+    expect(checkUpdate('daySignOff', 'driver', { signedOffBy: 'member-ben' }, day, 'member-ana').ok).toBe(false);
+    expect(checkUpdate('daySignOff', 'driver', { signedOffBy: 'member-ben', note: 'Handed over' }, day, 'member-ben').ok).toBe(true);
+  });
+});
+
 describe('who may update', () => {
   const d = FIXTURES.defect;
   const table: [string, RecordKind, Role, Record<string, unknown>, Record<string, unknown>, boolean][] = [

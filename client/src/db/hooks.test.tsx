@@ -50,7 +50,7 @@ describe('live reads', () => {
     render(<DefectList />);
     expect(await screen.findByRole('list')).toBeEmptyDOMElement();
 
-    const id = await act(() => createRecord(writer!, 'defect', defectFields()));
+    const id = await act(() => createRecord(writer!, 'defect', defectFields({ reportedBy: writer!.userId })));
     expect(await screen.findByText('Starboard handle strap frayed near the transom · limit · waiting')).toBeInTheDocument();
 
     const scope = { userId: 'u-1', clubId: 'c-1', role: 'driver' as const };
@@ -72,7 +72,7 @@ describe('live reads', () => {
   it('reads one record, and says when the phone does not have it', async () => {
     tokenStore.saveSession(sessionAnswer('crew'));
     const { rerender } = render(<DefectList />);
-    const id = await act(() => createRecord(writer!, 'defect', defectFields({ description: 'Cracked valve cap' })));
+    const id = await act(() => createRecord(writer!, 'defect', defectFields({ description: 'Cracked valve cap', reportedBy: writer!.userId })));
     rerender(<OneDefect id={id} />);
     expect(await screen.findByText('Cracked valve cap')).toBeInTheDocument();
     rerender(<OneDefect id="0190f1a0-0000-7000-8000-0000000000ff" />);

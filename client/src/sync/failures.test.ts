@@ -28,7 +28,7 @@ describe('sync failures', () => {
     tokenStore.saveSession(session);
     const scope = sessionAuth.scope()!;
     const db = openReplica(scope.userId);
-    await createRecord({ db, ...scope }, 'defect', defectFields());
+    await createRecord({ db, ...scope }, 'defect', defectFields({ reportedBy: scope.userId }));
     backend.routes['POST /api/auth/refresh'] = () =>
       new Response(JSON.stringify({ statusCode: 401, code: 'unauthorized', message: 'Refresh token refused.' }), { status: 401 });
     const fetchOf = globalThis.fetch;

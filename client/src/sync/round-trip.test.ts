@@ -110,7 +110,7 @@ describe('push and pull', () => {
     const backend = new FakeBackend();
     const ben = testDevice(backend, 'member-ben');
     const ids: string[] = [];
-    for (let i = 0; i < 5; i++) ids.push(await createRecord(ben.writer, 'defect', defectFields({ description: `Scuff ${i} on the hull` })));
+    for (let i = 0; i < 5; i++) ids.push(await createRecord(ben.writer, 'defect', defectFields({ description: `Scuff ${i} on the hull`, reportedBy: 'member-ben' })));
     await ben.sync();
     const ana = testDevice(backend, 'member-ana');
     // Ana's first sync, two records a page: when its first page arrives, Ben changes a record of

@@ -38,6 +38,7 @@ export const checkSpec = defineKind({
     create: 'crew',
     update: 'crew',
     delete: 'supervisor',
+    selfFields: ['performedBy'],
     fieldRoles: [
       { field: 'signedOffBy', minRole: 'supervisor' },
       { field: 'signedOffAt', minRole: 'supervisor' },

@@ -13,6 +13,6 @@ export const daySignOffSpec = defineKind({
     note: text(2000),
   }),
   immutable: ['sessionDate', 'boatId'],
-  access: { create: 'driver', update: 'driver', delete: 'supervisor' },
+  access: { create: 'driver', update: 'driver', delete: 'supervisor', selfFields: ['signedOffBy'] },
 });
 export type DaySignOffFields = z.infer<typeof daySignOffSpec.schema>;

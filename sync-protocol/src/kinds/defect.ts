@@ -38,6 +38,7 @@ export const defectSpec = defineKind({
     create: 'crew',
     update: 'crew',
     delete: 'supervisor',
+    selfFields: ['reportedBy'],
     // Anyone may report or reopen; returning a boat to service is a supervisor's call.
     fieldRoles: [
       { field: 'status', values: ['verified', 'rejected', 'assigned'], minRole: 'supervisor' },

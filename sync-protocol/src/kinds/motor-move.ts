@@ -15,7 +15,7 @@ export const motorMoveSpec = defineKind({
     reason: text(500),
   }),
   immutable: ['motorId', 'movedBy'],
-  access: { create: 'driver', update: 'supervisor', delete: 'supervisor' },
+  access: { create: 'driver', update: 'supervisor', delete: 'supervisor', selfFields: ['movedBy'] },
   recordChecks: (m) =>
     m.fromBoatId === m.toBoatId
       ? [{ field: 'toBoatId', message: 'The motor must move to a different boat (or to the store).' }]

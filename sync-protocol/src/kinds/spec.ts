@@ -25,6 +25,12 @@ export interface Access<F extends string = string> {
   fieldRoles?: readonly FieldRoleRule<F>[];
   /** A member named in this field may see and update the record whatever their role. */
   ownerField?: F;
+  /**
+   * Fields naming the member who writes them (who did the check, reported the defect): below a
+   * supervisor, a member may put only their own id there. A supervisor may enter a record for
+   * someone else, such as a paper check typed in afterwards.
+   */
+  selfFields?: readonly F[];
   /** Least role to see other members' records; everyone in the club when absent. */
   see?: Role;
 }

@@ -41,8 +41,8 @@ afterEach(async () => {
 describe('sync status', () => {
   it('shows changes waiting and no signal, then all sent after "Sync now"', async () => {
     const { backend, runner, writer } = setUp();
-    await createRecord(writer, 'defect', defectFields());
-    await createRecord(writer, 'defect', defectFields({ description: 'Tiller grip split' }));
+    await createRecord(writer, 'defect', defectFields({ reportedBy: writer.userId }));
+    await createRecord(writer, 'defect', defectFields({ description: 'Tiller grip split', reportedBy: writer.userId }));
     backend.offline = true;
     render(<SyncStatus runner={runner} />);
     await act(() => runner.idle());
@@ -66,7 +66,7 @@ describe('sync status', () => {
 
   it('lists a refused change with the server message until dismissed, and open conflicts', async () => {
     const { backend, runner, writer } = setUp();
-    const id = await createRecord(writer, 'defect', defectFields());
+    const id = await createRecord(writer, 'defect', defectFields({ reportedBy: writer.userId }));
     await runner.requestSync();
     const ben = testDevice(backend, 'member-ben', 'driver', 'c-1');
     await ben.sync();
@@ -91,7 +91,7 @@ describe('sync status', () => {
     const bytes = new Uint8Array(300).fill(7);
     bytes.set([0xff, 0xd8, 0xff, 0xe0]);
     const sha = await savePhoto(writer.db, 'c-1', bytes.buffer, 'image/jpeg');
-    await createRecord(writer, 'defect', defectFields({ photos: [sha] }));
+    await createRecord(writer, 'defect', defectFields({ photos: [sha], reportedBy: writer.userId }));
     backend.photoLimitBytes = 100;
     render(<SyncStatus runner={runner} />);
     await act(() => runner.idle());
