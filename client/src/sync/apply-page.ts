@@ -37,29 +37,42 @@ async function finishPull(db: ReplicaDb, clubId: string, sweepBelow: number | un
  * copy before it is written, so a screen never sees the edit disappear and come back.
  *
  * A pulled copy older than the one held is not written over it. `fromEmpty` says the pull began
- * with no record of the club on this phone and no checkpoint: every server copy held was then
- * written by an earlier page of this same pull, from an older change, so there is nothing to
- * compare with and the held rows are not read (on a first sync that read was a fifth of the time).
+ * with no record of the club on this phone and no checkpoint (at generation `gen`): every server
+ * copy held was then written by an earlier page of this same pull, from an older change, so there
+ * is nothing to compare with and the held rows are not read (on a first sync that read was a
+ * fifth of the time). The page's rows are then put before anything is read: IndexedDB copies a
+ * value when it is put, and a transaction's requests wait for the one before it, so the copying
+ * of this page overlaps the commit of the last. Rows with queued edits are put again, composed,
+ * in the same transaction; no screen sees the first put.
  */
 export async function applyPullPage(
-  db: ReplicaDb, clubId: string, page: PullResponse, now: number, { fromEmpty = false }: { fromEmpty?: boolean } = {},
+  db: ReplicaDb, clubId: string, page: PullResponse, now: number, { fromEmpty }: { fromEmpty?: { gen: number } } = {},
 ): Promise<void> {
   await db.transaction('rw', db.records, db.outbox, db.syncState, async () => {
-    const state = await loadClubState(db, clubId);
     const changes = page.changes.filter((c) => c.clubId === clubId);
+    const early = fromEmpty
+      ? db.records.bulkPut(changes.map((change) => composeRow({ id: change.id, kind: change.kind, clubId, server: change, gen: fromEmpty.gen }, [])!))
+      : undefined;
+    // Were the put to fail, the transaction fails with it and the awaits below say so first.
+    early?.catch(() => undefined);
+    const state = await loadClubState(db, clubId);
     const ids = changes.map((c) => c.id);
-    const existing = fromEmpty ? [] : await db.records.bulkGet(ids);
+    const existing = early ? [] : await db.records.bulkGet(ids);
     const entries = await db.outbox.where('recordId').anyOf(ids).toArray();
+    const byRecord = new Map<string, OutboxRow[]>();
+    for (const e of entries) byRecord.set(e.recordId, [...(byRecord.get(e.recordId) ?? []), e]);
     const rows: RecordRow[] = [];
     const done: OutboxRow[] = [];
     changes.forEach((change, i) => {
+      const mine = byRecord.get(change.id) ?? [];
+      if (early && mine.length === 0) return; // already put as it came
       const prev = existing[i]?.server;
       const server = prev && prev.version > change.version ? prev : change;
-      const mine = entries.filter((e) => e.recordId === change.id);
       done.push(...mine.filter((e) => !stillShown(e, server)));
       const row = composeRow({ id: change.id, kind: change.kind, clubId, server, gen: state.gen }, mine);
       if (row) rows.push(row);
     });
+    await early;
     await db.records.bulkPut(rows);
     await db.outbox.bulkDelete(done.map((e) => e.seq));
     await db.syncState.put(receiveClocks(await loadReplica(db, now), changes, now));

@@ -55,10 +55,11 @@ export async function pullAll(ctx: PullContext): Promise<void> {
   };
   let received = 0;
   let resets = 0;
-  let since = (await loadClubState(db, scope.clubId)).checkpoint;
+  const start = await loadClubState(db, scope.clubId);
+  let since = start.checkpoint;
   let next = ask(since);
   // A first sync: no checkpoint and nothing of the club here yet (see applyPullPage).
-  let fromEmpty = since === undefined && (await clubRows(db, scope.clubId).count()) === 0;
+  let fromEmpty = since === undefined && (await clubRows(db, scope.clubId).count()) === 0 ? { gen: start.gen } : undefined;
   for (;;) {
     const page = await next;
     if (page.resetRequired) {
@@ -66,7 +67,7 @@ export async function pullAll(ctx: PullContext): Promise<void> {
       if (since === undefined || ++resets > 1) throw new ApiError(200, 'bad_response', RESET_LOOP);
       await startReset(db, scope.clubId);
       since = undefined;
-      fromEmpty = false;
+      fromEmpty = undefined;
       next = ask(since);
       continue;
     }
