@@ -1,29 +1,32 @@
 import { buildMutation, encodeHlc, HybridClock, type Fields, type LocalView, type RecordKind } from '@breakline/sync-protocol';
-import { loadReplica } from './replica-state';
 import type { ReplicaDb } from './schema';
-import type { OutboxRow, RecordRow } from './types';
+import type { OutboxRow, RecordRow, ReplicaRow } from './types';
 import { uuid7 } from './uuid7';
-import { composeRow } from './view';
+import { layerChange } from './view';
 
 export interface AppendInput {
   clubId: string;
   kind: RecordKind;
   recordId: string;
-  /** The record as shown now; undefined for a new one. */
+  /** The record as shown now, read in this transaction; undefined for a new one. */
   row: RecordRow | undefined;
   view: LocalView | undefined;
   patch: Fields;
   deleted?: boolean;
   now: number;
+  /** The replica row (loadReplica), read in this transaction. */
+  replica: ReplicaRow;
 }
 
 /**
- * Queues one mutation and recomposes the record's row. Must run inside a rw transaction on
+ * Queues one mutation and lays it on the record's row. Must run inside a rw transaction on
  * records, outbox and syncState, so the change, its outbox entry, the clock and the seq counter
- * are written together or not at all.
+ * are written together or not at all. The caller reads the row and the replica in that
+ * transaction (side by side: each read waits for IndexedDB), and the three writes go out together;
+ * `commit`, when given, is called as soon as they are issued (see write.ts).
  */
-export async function appendMutation(db: ReplicaDb, input: AppendInput): Promise<OutboxRow> {
-  const replica = await loadReplica(db, input.now);
+export async function appendMutation(db: ReplicaDb, input: AppendInput, commit?: () => void): Promise<OutboxRow> {
+  const { replica } = input;
   // The clock is persisted, so an HLC never runs backwards across reloads even if the phone's time does.
   const clock = new HybridClock(replica.deviceId, { initial: replica.clock });
   const hlc = encodeHlc(clock.now(input.now));
@@ -39,11 +42,13 @@ export async function appendMutation(db: ReplicaDb, input: AppendInput): Promise
     deleted: input.deleted,
   });
   const entry: OutboxRow = { seq, clubId: input.clubId, recordId: input.recordId, kind: input.kind, status: 'pending', mutation };
-  await db.outbox.add(entry);
-  await db.syncState.put({ ...replica, clock: clock.current(), seq });
-  const entries = await db.outbox.where('recordId').equals(input.recordId).toArray();
-  const server = input.row?.server ?? null;
-  const row = composeRow({ id: input.recordId, kind: input.kind, clubId: input.clubId, server, gen: input.row?.gen }, entries);
-  if (row) await db.records.put(row);
+  const row = layerChange({ id: input.recordId, kind: input.kind, clubId: input.clubId }, input.row, entry);
+  const written = Promise.all([
+    db.outbox.add(entry),
+    db.syncState.put({ ...replica, clock: clock.current(), seq }),
+    db.records.put(row),
+  ]);
+  commit?.();
+  await written;
   return entry;
 }

@@ -36,6 +36,33 @@ export function composeRow(
   return row;
 }
 
+/**
+ * The row once `entry`, just queued, is laid on top: what composeRow gives with the entry added
+ * to the record's queued ones, without reading them again. It holds because every transaction
+ * that changes a record's pulled copy or its queue recomposes the row before it commits, so the
+ * row read in this transaction is already that composition. `row` is undefined for a new record.
+ */
+export function layerChange(
+  base: { id: string; kind: RecordKind; clubId: string },
+  row: RecordRow | undefined,
+  entry: OutboxRow,
+): RecordRow {
+  const next: RecordRow = {
+    id: base.id,
+    kind: base.kind,
+    clubId: base.clubId,
+    server: row?.server ?? null,
+    version: row?.version ?? 0,
+    // The mutation holds its own copy of the patch, so the row shares nothing with the caller.
+    fields: { ...row?.fields, ...entry.mutation.patch },
+    deleted: (row?.deleted ?? false) || entry.mutation.deleted === true,
+    waiting: (row?.waiting ?? 0) + 1,
+  };
+  if (row?.gen !== undefined) next.gen = row.gen;
+  if (typeof next.fields.boatId === 'string') next.boatId = next.fields.boatId;
+  return next;
+}
+
 export function toLocalView(row: RecordRow): LocalView {
   return { id: row.id, kind: row.kind, version: row.version, fields: row.fields, deleted: row.deleted, pending: row.waiting };
 }
