@@ -9,9 +9,12 @@ export function useAnswer(checkId: string, itemId: string) {
   const ctx = useReplica();
   const [error, setError] = useState<string | null>(null);
   async function save(entry: CheckItemEntry): Promise<void> {
-    setError(null);
+    // The write is started first: clearing a refusal on show re-renders the item, and the
+    // save need not wait behind that.
+    const saved = saveAnswer(ctx, checkId, itemId, entry);
+    if (error !== null) setError(null);
     try {
-      await saveAnswer(ctx, checkId, itemId, entry);
+      await saved;
     } catch (e) {
       if (!isLocalWriteError(e)) throw e;
       setError(e.message);

@@ -1,29 +1,23 @@
 import { DEFAULT_LAUNCH_TEMPLATE, DEFAULT_STOW_TEMPLATE } from '@breakline/sync-protocol';
-import { getRecord } from '@/db/queries';
 import type { LocalRecord } from '@/db/types';
 import { createRecord, updateRecord, type WriteContext } from '@/db/write';
-import { LocalWriteError } from '@/db/write-error';
+import { isLocalWriteError, LocalWriteError } from '@/db/write-error';
 import type { CheckItemEntry } from './types';
 
-const queues = new Map<string, Promise<void>>();
-
 /**
- * Saves one answer at once. Answers to one check are written one after another, each on top of
- * the check as stored, so two quick taps never overwrite each other's item.
+ * Saves one answer at once. The answer is laid into the results as stored when the write runs,
+ * inside its transaction, so two quick taps never overwrite each other's item; IndexedDB runs
+ * write transactions on the same tables in the order they were opened, so answers, and a finish
+ * tapped after them, are saved in the order they were given.
  */
 export function saveAnswer(ctx: WriteContext, checkId: string, itemId: string, entry: CheckItemEntry): Promise<void> {
-  const previous = queues.get(checkId) ?? Promise.resolve();
-  const next = previous.catch(() => undefined).then(async () => {
-    const check = await getRecord(ctx.db, ctx.clubId, 'check', checkId);
-    if (!check) throw new LocalWriteError('not-found', 'This check is not on this phone any more; start it again from Checks.');
-    await updateRecord(ctx, 'check', checkId, { results: { ...check.fields.results, [itemId]: entry } });
+  return updateRecord(ctx, 'check', checkId, (shown) => ({ results: { ...shown.results, [itemId]: entry } })).catch((e: unknown) => {
+    if (isLocalWriteError(e, 'not-found')) throw new LocalWriteError('not-found', 'This check is not on this phone any more; start it again from Checks.');
+    throw e;
   });
-  queues.set(checkId, next);
-  return next;
 }
 
 export async function finishCheck(ctx: WriteContext, checkId: string, now = new Date()): Promise<void> {
-  await queues.get(checkId)?.catch(() => undefined);
   await updateRecord(ctx, 'check', checkId, { status: 'complete', completedAt: now.toISOString() });
 }
 
