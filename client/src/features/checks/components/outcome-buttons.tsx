@@ -8,7 +8,11 @@ const LOOK: Record<CheckOutcome, { label: string; color: 'primary' | 'error' | '
   na: { label: 'N/A', color: 'inherit' },
 };
 
-/** Big answer buttons for one wet thumb; the chosen one is filled and says so to a screen reader. */
+/**
+ * Big answer buttons for one wet thumb; the chosen one is filled and says so to a screen reader.
+ * The fill shows at once, without the usual colour fade: a fade repaints the screen for a
+ * quarter of a second after each answer, and the next answer's save waits behind those frames.
+ */
 export function OutcomeButtons(props: {
   value: CheckOutcome | undefined;
   offer?: readonly CheckOutcome[];
@@ -27,7 +31,7 @@ export function OutcomeButtons(props: {
           aria-pressed={props.value === o}
           disabled={props.disabled}
           onClick={() => props.onChoose(o)}
-          sx={{ minHeight: 56, fontSize: '1.1rem' }}
+          sx={{ minHeight: 56, fontSize: '1.1rem', transition: 'none' }}
         >
           {LOOK[o].label}
         </Button>
