@@ -167,6 +167,8 @@ describe('sync push and pull', () => {
     let pages = 0;
     for (;;) {
       const res = await pull(crew.accessToken, `?since=${since}&limit=3`).expect(200);
+      // The headers repeat the body's checkpoint and hasMore, for a phone to ask ahead.
+      expect([res.headers['breakline-checkpoint'], res.headers['breakline-has-more']]).toEqual([res.body.checkpoint, String(res.body.hasMore)]);
       seen.push(...res.body.changes.map((c: { id: string }) => c.id));
       since = res.body.checkpoint;
       pages++;

@@ -7,6 +7,13 @@ export const PROTOCOL_VERSION = 1;
 export const MAX_MUTATIONS_PER_PUSH = 10_000;
 export const MAX_PULL_LIMIT = 1000;
 export const DEFAULT_PULL_LIMIT = 500;
+/**
+ * A pull answer also carries its checkpoint and hasMore as headers, so a phone can ask for the
+ * next page as soon as the headers arrive, while this page's body is still coming and being read.
+ * The body stays the authority: a phone that ignores the headers loses nothing.
+ */
+export const PULL_CHECKPOINT_HEADER = 'Breakline-Checkpoint';
+export const PULL_HAS_MORE_HEADER = 'Breakline-Has-More';
 
 export type Fields = Record<string, unknown>;
 

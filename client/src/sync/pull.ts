@@ -1,11 +1,11 @@
-import type { PullResponse } from '@breakline/sync-protocol';
+import { PULL_CHECKPOINT_HEADER, PULL_HAS_MORE_HEADER, type PullResponse } from '@breakline/sync-protocol';
 import { clubRows } from '@/db/queries';
 import { loadClubState, updateClubState } from '@/db/replica-state';
 import type { ReplicaDb } from '@/db/schema';
 import { ApiError } from '@/lib/api-error';
 import { applyPullPage } from './apply-page';
 import type { ProgressListener } from './progress';
-import { syncRequest, type TransportContext } from './transport';
+import { readJson, syncResponse, type TransportContext } from './transport';
 
 /** A page of 1,000 is one IndexedDB transaction of about a quarter second on a phone. */
 export const PULL_PAGE = 1000;
@@ -38,48 +38,66 @@ async function startReset(db: ReplicaDb, clubId: string): Promise<void> {
   });
 }
 
+interface Asked {
+  /** The checkpoint and hasMore the answer's headers give, once they arrive; null without them. */
+  head: Promise<{ checkpoint: string; hasMore: boolean } | null>;
+  page: Promise<PullResponse>;
+}
+
 /**
  * Pulls pages until the server has nothing more; each page and its checkpoint commit together.
- * The next page is asked for while this one is written (its `since` is this page's checkpoint),
- * so the server's work and IndexedDB's overlap instead of taking turns.
+ * The next page is asked for while this one is read and written: as soon as this answer's
+ * headers give its checkpoint, or else once its body is read. So the server's work, the wire and
+ * IndexedDB overlap instead of taking turns. The body is the authority: should its checkpoint
+ * differ from the headers', the early request is dropped and the next page asked for again.
  */
 export async function pullAll(ctx: PullContext): Promise<void> {
   const { db, scope } = ctx;
   const limit = ctx.pageSize ?? PULL_PAGE;
-  const ask = async (since: string | undefined): Promise<PullResponse> => {
+  const ask = (since: string | undefined): Asked => {
     const query = new URLSearchParams({ limit: String(limit) });
     if (since !== undefined) query.set('since', since);
-    const page = await syncRequest<unknown>(ctx, `/api/sync/pull?${query}`);
-    if (!isPullResponse(page)) throw new ApiError(200, 'bad_response', 'The server sent a pull answer Breakline cannot read.');
-    return page;
+    const response = syncResponse(ctx, `/api/sync/pull?${query}`);
+    const head = response.then((r) => {
+      const checkpoint = r.ok ? r.headers.get(PULL_CHECKPOINT_HEADER) : null;
+      const more = r.headers.get(PULL_HAS_MORE_HEADER);
+      return checkpoint !== null && (more === 'true' || more === 'false') ? { checkpoint, hasMore: more === 'true' } : null;
+    }, () => null);
+    const page = response.then(async (r) => {
+      const body = await readJson<unknown>(r);
+      if (!isPullResponse(body)) throw new ApiError(200, 'bad_response', 'The server sent a pull answer Breakline cannot read.');
+      return body;
+    });
+    // Should an early request be dropped, its failure is not anyone's to hear.
+    page.catch(() => undefined);
+    return { head, page };
   };
-  let received = 0;
-  let resets = 0;
   const start = await loadClubState(db, scope.clubId);
   let since = start.checkpoint;
-  let next = ask(since);
   // A first sync: no checkpoint and nothing of the club here yet (see applyPullPage).
   let fromEmpty = since === undefined && (await clubRows(db, scope.clubId).count()) === 0 ? { gen: start.gen } : undefined;
+  let received = 0;
+  let resets = 0;
+  let current = ask(since);
   for (;;) {
-    const page = await next;
+    const head = await current.head;
+    let ahead = head?.hasMore ? { since: head.checkpoint, asked: ask(head.checkpoint) } : undefined;
+    const page = await current.page;
     if (page.resetRequired) {
       // Asked again while already pulling afresh: going on would pull for ever.
       if (since === undefined || ++resets > 1) throw new ApiError(200, 'bad_response', RESET_LOOP);
       await startReset(db, scope.clubId);
       since = undefined;
       fromEmpty = undefined;
-      next = ask(since);
+      current = ask(since);
       continue;
     }
-    if (page.hasMore) {
-      since = page.checkpoint;
-      next = ask(since);
-      // Should writing this page fail, the answer to the early request is dropped unread.
-      next.catch(() => undefined);
-    }
+    if (page.hasMore && ahead?.since !== page.checkpoint) ahead = { since: page.checkpoint, asked: ask(page.checkpoint) };
+    since = page.checkpoint;
     await applyPullPage(db, scope.clubId, page, ctx.now(), { fromEmpty });
     received += page.changes.length;
     ctx.onProgress?.({ phase: 'receiving', done: received, more: page.hasMore });
     if (!page.hasMore) return;
+    current = ahead!.asked;
   }
 }

@@ -136,4 +136,37 @@ describe('push and pull', () => {
     expect(shown.find((r) => r.id === ids[0])).toMatchObject({ version: 2, fields: { actionTaken: 'Patched and re-glued' } });
     expect(shown.find((r) => r.id === ids[1])).toMatchObject({ version: 1, waiting: 1, fields: { severity: 'stand-down' } });
   });
+
+  it('asks for the next page from the headers, and goes by the body when they say otherwise or say nothing', async () => {
+    const backend = new FakeBackend();
+    const ben = testDevice(backend, 'member-ben');
+    for (let i = 0; i < 5; i++) await createRecord(ben.writer, 'defect', defectFields({ description: `Scuff ${i} on the hull`, reportedBy: 'member-ben' }));
+    await ben.sync();
+    const { pullAll } = await import('./pull');
+    const pullsOf = () => backend.requests.filter((r) => r.path === '/api/sync/pull').map((r) => r.since ?? 'start');
+
+    const ana = testDevice(backend, 'member-ana');
+    backend.requests.length = 0;
+    await pullAll({ db: ana.db, scope: ana.scope, auth: ana.auth, fetch: backend.fetch, now: () => backend.now, pageSize: 2 });
+    const straight = pullsOf();
+    expect(straight).toHaveLength(3);
+    expect(await listRecords(ana.db, ana.scope.clubId, 'defect')).toHaveLength(5);
+
+    // Headers that contradict the body: the early request is dropped and the body's checkpoint asked.
+    backend.pullHeaderCheckpoint = () => '0.999999';
+    const cy = testDevice(backend, 'member-cy');
+    backend.requests.length = 0;
+    await pullAll({ db: cy.db, scope: cy.scope, auth: cy.auth, fetch: backend.fetch, now: () => backend.now, pageSize: 2 });
+    expect(pullsOf().filter((s) => s === '0.999999')).toHaveLength(2);
+    expect(pullsOf().filter((s) => s !== '0.999999')).toEqual(straight);
+    expect(await listRecords(cy.db, cy.scope.clubId, 'defect')).toHaveLength(5);
+
+    // No headers, as from an older server: the body alone.
+    backend.pullHeaderCheckpoint = () => null;
+    const di = testDevice(backend, 'member-di');
+    backend.requests.length = 0;
+    await pullAll({ db: di.db, scope: di.scope, auth: di.auth, fetch: backend.fetch, now: () => backend.now, pageSize: 2 });
+    expect(pullsOf()).toEqual(straight);
+    expect(await listRecords(di.db, di.scope.clubId, 'defect')).toHaveLength(5);
+  });
 });

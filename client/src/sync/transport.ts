@@ -67,11 +67,20 @@ export async function authorizedSend(ctx: TransportContext, path: string, init: 
  * apiRequest cannot send a compressed body, so this does its own fetch with the same rules.
  */
 export async function syncRequest<T>(ctx: TransportContext, path: string, body?: unknown): Promise<T> {
+  return readJson<T>(await syncResponse(ctx, path, body));
+}
+
+/** syncRequest up to the answer's headers: its body is left to readJson. */
+export async function syncResponse(ctx: TransportContext, path: string, body?: unknown): Promise<Response> {
   const encoded = body === undefined ? undefined : await encodeBody(JSON.stringify(body), ctx.gzip ?? true);
   const headers: Record<string, string> = { Accept: 'application/json' };
   if (encoded) headers['Content-Type'] = 'application/json';
   if (encoded?.encoding) headers['Content-Encoding'] = encoded.encoding;
-  const response = await authorizedSend(ctx, path, { method: body === undefined ? 'GET' : 'POST', headers, body: encoded?.body });
+  return authorizedSend(ctx, path, { method: body === undefined ? 'GET' : 'POST', headers, body: encoded?.body });
+}
+
+/** The JSON body of a sync answer; an error answer as the ApiError it describes. */
+export async function readJson<T>(response: Response): Promise<T> {
   const text = await response.text();
   if (!response.ok) throw parseErrorBody(response.status, response.statusText, text);
   try {

@@ -17,11 +17,14 @@ import { mayReceive, type WireRow } from '../records/wire-rows.js';
  * a page of a thousand checks is over a megabyte, and parsing it only to write it out again
  * took most of a pull's time.
  */
+/** A PullResponse as JSON text, with the two values the answer's headers repeat. */
+export interface PulledPage { json: string; checkpoint: string; hasMore: boolean }
+
 @Injectable()
 export class PullService {
   constructor(private readonly db: DataSource) {}
 
-  async pull(p: Principal, query: Record<string, unknown>): Promise<string> {
+  async pull(p: Principal, query: Record<string, unknown>): Promise<PulledPage> {
     const q = PullQuerySchema.safeParse(query);
     if (!q.success) {
       const details = q.error.issues.map((i) => ({ field: i.path.join('.') || 'query', message: i.message }));
@@ -36,17 +39,18 @@ export class PullService {
       const horizon = Number(state?.purged_through_seq ?? 0);
       if (needsFreshStart(since, horizon)) {
         const reset: PullResponse = { changes: [], checkpoint: formatCheckpoint({ horizon, seq: Number(state?.last_seq ?? 0) }), hasMore: false, resetRequired: true };
-        return JSON.stringify(reset);
+        return { json: JSON.stringify(reset), checkpoint: reset.checkpoint, hasMore: false };
       }
       const { rows, hasMore } = await recordStore.changedPage(em, p.clubId, since.seq, limit);
       return this.page(p, rows, hasMore, horizon, since.seq);
     });
   }
 
-  private page(p: Principal, rows: WireRow[], hasMore: boolean, horizon: number, sinceSeq: number): string {
+  private page(p: Principal, rows: WireRow[], hasMore: boolean, horizon: number, sinceSeq: number): PulledPage {
     // Records the caller may not see still move the checkpoint on, so they are never asked for again.
     const shown = rows.filter((r) => mayReceive(r, p.role, p.userId)).map((r) => r.json);
     const seq = rows.length ? rows[rows.length - 1]!.changeSeq : sinceSeq;
-    return `{"changes":[${shown.join(',')}],"checkpoint":${JSON.stringify(formatCheckpoint({ horizon, seq }))},"hasMore":${hasMore}}`;
+    const checkpoint = formatCheckpoint({ horizon, seq });
+    return { json: `{"changes":[${shown.join(',')}],"checkpoint":${JSON.stringify(checkpoint)},"hasMore":${hasMore}}`, checkpoint, hasMore };
   }
 }

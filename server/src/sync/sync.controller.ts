@@ -1,6 +1,7 @@
-import { Body, Controller, Get, Header, HttpCode, Param, ParseUUIDPipe, Post, Query } from '@nestjs/common';
+import { Body, Controller, Get, Header, HttpCode, Param, ParseUUIDPipe, Post, Query, Res } from '@nestjs/common';
+import type { Response } from 'express';
 import { ApiBearerAuth, ApiTags } from '@nestjs/swagger';
-import type { ConflictRecord, PushResponse } from '@breakline/sync-protocol';
+import { PULL_CHECKPOINT_HEADER, PULL_HAS_MORE_HEADER, type ConflictRecord, type PushResponse } from '@breakline/sync-protocol';
 import { CurrentPrincipal, MinRole, type Principal } from '../auth/principal.js';
 import { PushService } from './push.service.js';
 import { PullService } from './pull.service.js';
@@ -20,11 +21,14 @@ export class SyncController {
     return this.pushes.push(p, body);
   }
 
-  /** A PullResponse, sent as the JSON text the service put together. */
+  /** A PullResponse, sent as the JSON text the service put together; its checkpoint and hasMore also as headers. */
   @Get('pull')
   @Header('Content-Type', 'application/json; charset=utf-8')
-  pull(@CurrentPrincipal() p: Principal, @Query(RawBody) query: Record<string, unknown>): Promise<string> {
-    return this.pulls.pull(p, query);
+  async pull(@CurrentPrincipal() p: Principal, @Query(RawBody) query: Record<string, unknown>, @Res({ passthrough: true }) res: Response): Promise<string> {
+    const page = await this.pulls.pull(p, query);
+    res.setHeader(PULL_CHECKPOINT_HEADER, page.checkpoint);
+    res.setHeader(PULL_HAS_MORE_HEADER, String(page.hasMore));
+    return page.json;
   }
 
   /** What a phone shows in its sync status; any member may ask. */

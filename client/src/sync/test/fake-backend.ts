@@ -1,4 +1,4 @@
-import { MemorySyncServer, SyncRequestError, type AuthContext } from '@breakline/sync-protocol';
+import { MemorySyncServer, PULL_CHECKPOINT_HEADER, PULL_HAS_MORE_HEADER, SyncRequestError, type AuthContext } from '@breakline/sync-protocol';
 
 /** A fixed physical time for the server and the phones; tests move it on by hand. */
 export const T0 = 1_796_000_000_000;
@@ -8,6 +8,8 @@ export interface SeenRequest {
   path: string;
   gzip: boolean;
   mutations?: number;
+  /** A pull's `since`. */
+  since?: string;
 }
 
 const CODES: Record<number, string> = { 400: 'validation_failed', 403: 'forbidden', 404: 'not_found', 409: 'conflict', 426: 'protocol_outdated' };
@@ -44,6 +46,11 @@ export class FakeBackend {
   loseNextPhotoAnswer = false;
   /** The upload size limit (413 above it). */
   photoLimitBytes = 10 * 1024 * 1024;
+  /**
+   * What the pull answer's checkpoint header says, given the body's: the same by default; null
+   * leaves the headers out (an older server), another value is a header the body contradicts.
+   */
+  pullHeaderCheckpoint?: (checkpoint: string) => string | null;
   /** Other routes (e.g. the auth refresh) answered as given. */
   readonly routes: Record<string, () => Response> = {};
   private readonly tokens = new Map<string, AuthContext>();
@@ -57,6 +64,7 @@ export class FakeBackend {
     const method = init.method ?? 'GET';
     const gzip = new Headers(init.headers).get('Content-Encoding') === 'gzip';
     const seen: SeenRequest = { method, path: url.pathname, gzip };
+    if (url.searchParams.has('since')) seen.since = url.searchParams.get('since')!;
     this.requests.push(seen);
     if (this.offline) throw new TypeError('Failed to fetch');
     const route = this.routes[`${method} ${url.pathname}`];
@@ -88,7 +96,15 @@ export class FakeBackend {
       }
       if (method === 'GET' && url.pathname === '/api/sync/pull') {
         if (this.outdated) throw new SyncRequestError(426, 'This app is out of date. It will update itself; then sync again.');
-        return json(200, this.server.pull(auth, Object.fromEntries(url.searchParams)));
+        const page = this.server.pull(auth, Object.fromEntries(url.searchParams));
+        const answer = json(200, page);
+        // As the server does: the checkpoint and hasMore again as headers, for a phone to ask ahead.
+        const checkpoint = this.pullHeaderCheckpoint?.(page.checkpoint) ?? page.checkpoint;
+        if (checkpoint !== null) {
+          answer.headers.set(PULL_CHECKPOINT_HEADER, checkpoint);
+          answer.headers.set(PULL_HAS_MORE_HEADER, String(page.hasMore));
+        }
+        return answer;
       }
       const photo = /^\/api\/attachments\/([0-9a-f]{64})$/.exec(url.pathname);
       if (photo) return await this.attachment(method, `${auth.clubId}/${photo[1]}`, photo[1]!, init);
