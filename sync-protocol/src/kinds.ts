@@ -1,6 +1,6 @@
 import type { z } from 'zod';
 import { RECORD_KINDS, isRecordKind, type RecordKind } from './kinds/names.js';
-import type { KindSpec, MergeRule } from './kinds/spec.js';
+import type { KindSpec } from './kinds/spec.js';
 import { boatSpec } from './kinds/boat.js';
 import { motorSpec } from './kinds/motor.js';
 import { motorMoveSpec } from './kinds/motor-move.js';
@@ -16,7 +16,7 @@ import { memberSpec } from './kinds/member.js';
 
 export { RECORD_KINDS, isRecordKind, type RecordKind };
 
-/** The registry: one spec a kind, holding its fields, merge rules and permissions as data. */
+/** The registry: one spec a kind, its fields' schema with its rules (kind-rules.ts has the rules alone). */
 export const KIND_SPECS = {
   boat: boatSpec,
   motor: motorSpec,
@@ -41,14 +41,6 @@ export function kindSpec(kind: RecordKind): KindSpec {
   return spec as KindSpec;
 }
 
-export function mergeRuleOf(kind: RecordKind, field: string): MergeRule {
-  return (kindSpec(kind).merge as Record<string, MergeRule | undefined> | undefined)?.[field] ?? 'lww';
-}
-
 export function fieldNames(kind: RecordKind): string[] {
   return Object.keys(kindSpec(kind).schema.shape);
-}
-
-export function isImmutableField(kind: RecordKind, field: string): boolean {
-  return (kindSpec(kind).immutable ?? []).includes(field);
 }

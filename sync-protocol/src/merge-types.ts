@@ -1,4 +1,4 @@
-import { mergeRuleOf, type RecordKind } from './kinds.js';
+import type { RecordKind } from './kinds/names.js';
 import type { Role } from './roles.js';
 import type { Fields } from './wire.js';
 import { deepEqual } from './deep-equal.js';

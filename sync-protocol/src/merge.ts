@@ -1,4 +1,4 @@
-import { mergeRuleOf } from './kinds.js';
+import { mergeRuleOf } from './kind-rules.js';
 import type { Fields } from './wire.js';
 import { deepEqual } from './deep-equal.js';
 import { compareEncodedHlc } from './hlc.js';

@@ -1,4 +1,5 @@
-import { kindSpec, type RecordKind } from './kinds.js';
+import { kindRules } from './kind-rules.js';
+import type { RecordKind } from './kinds/names.js';
 import type { FieldRoleRule } from './kinds/spec.js';
 import { roleAtLeast, whoMay, type Role } from './roles.js';
 import { deepEqual } from './deep-equal.js';
@@ -19,7 +20,7 @@ function refusal(min: Role, rule: FieldRoleRule | undefined, field: string, valu
 }
 
 function isOwner(kind: RecordKind, fields: Fields | undefined, userId: string | undefined): boolean {
-  const owner = kindSpec(kind).access.ownerField;
+  const owner = kindRules(kind).access.ownerField;
   return owner !== undefined && userId !== undefined && fields?.[owner] === userId;
 }
 
@@ -33,13 +34,13 @@ function fieldsOf(kind: RecordKind, record: Fields): Fields {
 /** Whether `role` may see a record (a SyncRecord or its fields): incident notes only their author and drivers up. */
 export function canSee(kind: RecordKind, role: Role, record: Fields, userId?: string): boolean {
   const fields = fieldsOf(kind, record);
-  const min = kindSpec(kind).access.see ?? 'crew';
+  const min = kindRules(kind).access.see ?? 'crew';
   return roleAtLeast(role, min) || isOwner(kind, fields, userId);
 }
 
 /** Whether `role` may create a record; given the fields, also whether it may set each of them. */
 export function checkCreate(kind: RecordKind, role: Role, fields?: Fields, userId?: string): Decision {
-  const spec = kindSpec(kind);
+  const spec = kindRules(kind);
   const { access } = spec;
   if (!roleAtLeast(role, access.create)) return no(`Only ${whoMay(access.create)} may add ${spec.label}.`);
   if (!fields) return OK;
@@ -56,7 +57,7 @@ export function checkCreate(kind: RecordKind, role: Role, fields?: Fields, userI
 
 /** A refusal when a member below supervisor names someone else in one of the kind's selfFields. */
 function notSelf(kind: RecordKind, role: Role, changes: readonly [string, unknown][], userId: string | undefined): Decision | undefined {
-  const spec = kindSpec(kind);
+  const spec = kindRules(kind);
   const own = spec.access.selfFields;
   if (!own || userId === undefined || roleAtLeast(role, 'supervisor')) return undefined;
   const other = changes.find(([field, value]) => own.includes(field) && value !== null && value !== undefined && value !== userId);
@@ -68,7 +69,7 @@ function notSelf(kind: RecordKind, role: Role, changes: readonly [string, unknow
  * value equals the current one are not changes, so resending a whole form is harmless.
  */
 export function checkUpdate(kind: RecordKind, role: Role, patch: Fields, current: Fields, userId?: string): Decision {
-  const spec = kindSpec(kind);
+  const spec = kindRules(kind);
   const { access } = spec;
   if (!canSee(kind, role, current, userId)) return no(`You do not have access to this ${spec.label.replace(/^an? /, '')}.`);
   const owner = isOwner(kind, current, userId);
@@ -90,7 +91,7 @@ export function checkUpdate(kind: RecordKind, role: Role, patch: Fields, current
 }
 
 export function checkDelete(kind: RecordKind, role: Role, current?: Fields, userId?: string): Decision {
-  const spec = kindSpec(kind);
+  const spec = kindRules(kind);
   if (current && !canSee(kind, role, current, userId)) return no(`You do not have access to this ${spec.label.replace(/^an? /, '')}.`);
   return roleAtLeast(role, spec.access.delete) ? OK : no(`Only ${whoMay(spec.access.delete)} may delete ${spec.label}.`);
 }

@@ -1,4 +1,4 @@
-import { fieldLabel, kindSpec } from '@breakline/sync-protocol';
+import { fieldLabel, kindRules } from '@breakline/sync-protocol';
 import type { FailureReason, RejectedRow } from '@/db/types';
 import type { SyncStatus } from './status';
 
@@ -67,7 +67,7 @@ export function headline(s: SyncStatus, now: number): string {
 
 /** "Your change to a defect (status, notes) was not saved." */
 export function rejectedTitle(r: RejectedRow): string {
-  const what = kindSpec(r.kind).label;
+  const what = kindRules(r.kind).label;
   if (r.deleted) return `Deleting ${what} was not done.`;
   const fields = Object.keys(r.patch).map((f) => fieldLabel([f]));
   const list = fields.length > 0 && fields.length <= 4 ? ` (${fields.join(', ')})` : '';

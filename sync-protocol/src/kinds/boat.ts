@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { boatRules } from './boat-rules.js';
 import { label, positive, text } from './common.js';
 import { defineKind } from './spec.js';
 
@@ -17,24 +18,17 @@ const airChamber = z
 
 const gear = z.strictObject({ item: label(80), count: z.number().int().min(1) });
 
-/** A boat and its specification: chambers with the maker's pressure range, gear it carries. */
-export const boatSpec = defineKind({
-  label: 'a boat',
-  schema: z.strictObject({
-    fleetNumber: label(20),
-    name: label(80),
-    hullSerial: text(40).nullable(),
-    airChambers: z.array(airChamber).max(20),
-    requiredGear: z.array(gear).max(60),
-    notes: text(4000),
-    inService: z.boolean(),
-  }),
-  access: { create: 'supervisor', update: 'supervisor', delete: 'admin' },
-  recordChecks: (b) => {
-    const ids = b.airChambers.map((c) => c.id);
-    const dup = ids.find((id, i) => ids.indexOf(id) !== i);
-    return dup === undefined ? [] : [{ field: 'airChambers', message: `Air chamber id "${dup}" is used twice.` }];
-  },
+const boatSchema = z.strictObject({
+  fleetNumber: label(20),
+  name: label(80),
+  hullSerial: text(40).nullable(),
+  airChambers: z.array(airChamber).max(20),
+  requiredGear: z.array(gear).max(60),
+  notes: text(4000),
+  inService: z.boolean(),
 });
-export type BoatFields = z.infer<typeof boatSpec.schema>;
+
+/** A boat and its specification: chambers with the maker's pressure range, gear it carries. */
+export const boatSpec = defineKind({ ...boatRules, schema: boatSchema });
+export type BoatFields = z.infer<typeof boatSchema>;
 export type AirChamber = BoatFields['airChambers'][number];

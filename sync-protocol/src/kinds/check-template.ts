@@ -1,9 +1,7 @@
 import { z } from 'zod';
+import { CHECK_ITEM_KINDS, CHECK_TYPES, checkTemplateRules } from './check-template-rules.js';
 import { label, text } from './common.js';
 import { defineKind } from './spec.js';
-
-export const CHECK_TYPES = ['launch', 'stow'] as const;
-export const CHECK_ITEM_KINDS = ['pass-fail', 'count', 'reading', 'text', 'photo'] as const;
 
 const item = z
   .strictObject({
@@ -39,29 +37,20 @@ const section = z.strictObject({
   items: z.array(item).min(1).max(100),
 });
 
+const checkTemplateSchema = z.strictObject({
+  checkType: z.enum(CHECK_TYPES),
+  name: label(80),
+  templateVersion: z.number().int().min(1),
+  sections: z.array(section).min(1).max(30),
+  retired: z.boolean(),
+});
+
 /**
  * One version of a club's checklist. An edit is saved as a new record with the next
  * templateVersion; a saved version's content never changes, so a check keeps the meaning of the
  * template it was run against. Only `retired` may change afterwards.
  */
-export const checkTemplateSpec = defineKind({
-  label: 'a check template',
-  schema: z.strictObject({
-    checkType: z.enum(CHECK_TYPES),
-    name: label(80),
-    templateVersion: z.number().int().min(1),
-    sections: z.array(section).min(1).max(30),
-    retired: z.boolean(),
-  }),
-  immutable: ['checkType', 'name', 'templateVersion', 'sections'],
-  // Club set-up is the admin's; supervisors run the checks and defects made from it.
-  access: { create: 'admin', update: 'admin', delete: 'admin' },
-  recordChecks: (t) => {
-    const ids = t.sections.flatMap((s) => s.items.map((i) => i.id));
-    const dup = ids.find((id, i) => ids.indexOf(id) !== i);
-    return dup === undefined ? [] : [{ field: 'sections', message: `Item id "${dup}" is used twice.` }];
-  },
-});
-export type CheckTemplateFields = z.infer<typeof checkTemplateSpec.schema>;
+export const checkTemplateSpec = defineKind({ ...checkTemplateRules, schema: checkTemplateSchema });
+export type CheckTemplateFields = z.infer<typeof checkTemplateSchema>;
 export type CheckTemplateSection = CheckTemplateFields['sections'][number];
 export type CheckTemplateItem = CheckTemplateSection['items'][number];

@@ -46,21 +46,37 @@ export interface UpdateContext<T> {
   current: T;
 }
 
-export interface KindSpec<Shape extends z.ZodRawShape = z.ZodRawShape> {
+/**
+ * A kind's rules apart from its fields' schema: its name, merge rules, fixed fields, who may do
+ * what, and checks across fields. They live apart from the schemas (and zod) so that code that
+ * only reads records or asks who may change them, such as a phone's first screen, does not load
+ * the validator with them.
+ */
+export interface KindRules<T extends object = Record<string, unknown>> {
   /** The kind's name in messages: "a defect", "a check template". */
   label: string;
-  schema: z.ZodObject<Shape, z.core.$strict>;
-  merge?: { readonly [K in keyof Shape]?: MergeRule };
+  merge?: { readonly [K in keyof T]?: MergeRule };
   /** Fields fixed once the record exists (clubId and the sync columns always are). */
-  immutable?: readonly (keyof Shape & string)[];
-  access: Access<keyof Shape & string>;
+  immutable?: readonly (keyof T & string)[];
+  access: Access<keyof T & string>;
   /** Rules across fields of a whole record; kept few so that merged records still pass. */
-  recordChecks?: (fields: z.infer<z.ZodObject<Shape, z.core.$strict>>) => FieldError[];
+  recordChecks?: (fields: T) => FieldError[];
   /** Permission rules that depend on the current value, where data cannot say it. */
-  updateCheck?: (ctx: UpdateContext<z.infer<z.ZodObject<Shape, z.core.$strict>>>) => string | null;
+  updateCheck?: (ctx: UpdateContext<T>) => string | null;
+}
+
+/** A kind's rules with the zod schema of its fields. */
+export interface KindSpec<Shape extends z.ZodRawShape = z.ZodRawShape>
+  extends KindRules<z.infer<z.ZodObject<Shape, z.core.$strict>>> {
+  schema: z.ZodObject<Shape, z.core.$strict>;
 }
 
 /** Identity with type inference, so each kind's rules are checked against its own fields. */
+export function defineRules<T extends object>(rules: KindRules<T>): KindRules<T> {
+  return rules;
+}
+
+/** Identity with type inference: a kind's rules joined to the schema they were checked against. */
 export function defineKind<Shape extends z.ZodRawShape>(spec: KindSpec<Shape>): KindSpec<Shape> {
   return spec;
 }

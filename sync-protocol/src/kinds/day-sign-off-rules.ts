@@ -1,0 +1,8 @@
+import type { DaySignOffFields } from './day-sign-off.js';
+import { defineRules } from './spec.js';
+
+export const daySignOffRules = defineRules<DaySignOffFields>({
+  label: "a day's sign-off",
+  immutable: ['sessionDate', 'boatId'],
+  access: { create: 'driver', update: 'driver', delete: 'supervisor', selfFields: ['signedOffBy'] },
+});

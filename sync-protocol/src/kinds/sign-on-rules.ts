@@ -1,0 +1,12 @@
+import type { SignOnFields } from './sign-on.js';
+import { defineRules } from './spec.js';
+
+export const signOnRules = defineRules<SignOnFields>({
+  label: 'a sign-on',
+  immutable: ['boatId', 'memberId', 'sessionDate'],
+  access: { create: 'crew', update: 'crew', delete: 'driver' },
+  recordChecks: (s) =>
+    s.signedOffAt !== null && Date.parse(s.signedOffAt) < Date.parse(s.signedOnAt)
+      ? [{ field: 'signedOffAt', message: 'Signed off must not be before signed on.' }]
+      : [],
+});
