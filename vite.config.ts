@@ -1,5 +1,6 @@
 import { fileURLToPath } from 'node:url';
 import react from '@vitejs/plugin-react';
+import type { Plugin } from 'vite';
 import { VitePWA } from 'vite-plugin-pwa';
 import { defineConfig } from 'vitest/config';
 
@@ -49,24 +50,53 @@ const pwa = VitePWA({
   },
 });
 
+// The two first screens: sign-in, and the signed-in shell with Today; and what both draw with.
+const signInScreen = /client[\\/]src[\\/]app[\\/]pages[\\/]sign-in-page\.tsx$/;
+const signedInScreen = /client[\\/]src[\\/]app[\\/]signed-in\.ts$/;
+const sharedByFirstScreens =
+  /@mui[\\/](material[\\/](Alert|IconButton|List|ListItemButton|Paper|SvgIcon)|system[\\/]useThemeProps)[\\/]|client[\\/]src[\\/]features[\\/]auth[\\/]members[\\/]auth-lock\.ts$/;
+
+/**
+ * Fails the build when one first screen's chunk imports the other's: a signed-in phone would
+ * load the sign-in screen, or the sign-in screen the local store and sync. The fix is to add
+ * what they share to `sharedByFirstScreens`.
+ */
+const firstScreensApart: Plugin = {
+  name: 'breakline:first-screens-apart',
+  generateBundle(_options, bundle) {
+    const chunks = Object.values(bundle).filter((c) => c.type === 'chunk');
+    const [signIn, signedIn] = ['sign-in', 'signed-in'].map((name) => chunks.find((c) => c.name === name));
+    if (!signIn || !signedIn) this.error('The sign-in or signed-in chunk is missing; see codeSplitting in vite.config.ts.');
+    for (const [from, to] of [[signIn, signedIn], [signedIn, signIn]]) {
+      if (!from.imports.includes(to.fileName)) continue;
+      this.error(
+        `The ${from.name} chunk (${from.fileName}) imports from the ${to.name} chunk (${to.fileName}). Add the ` +
+          'modules both first screens use to sharedByFirstScreens in vite.config.ts.',
+      );
+    }
+  },
+};
+
 export default defineConfig(({ mode }) => ({
   root: clientDir,
   resolve: { alias: { '@': srcDir } },
-  plugins: mode === 'test' ? [react()] : [react(), pwa],
+  plugins: mode === 'test' ? [react()] : [react(), pwa, firstScreensApart],
   build: {
     outDir: fileURLToPath(new URL('./client/dist', import.meta.url)),
     emptyOutDir: true,
     rolldownOptions: {
       output: {
-        // Three chunks for the first screens instead of dozens of slivers: what every route needs
-        // (the entry), what the sign-in screen adds (MUI's text field), and what the signed-in
-        // shell with Today adds (the local store, sync, the record rules). Other screens split as
-        // the bundler sees fit.
+        // A few chunks for the first screens instead of dozens of slivers: what every route needs
+        // (the entry), what both first screens draw with (MUI's paper and alert), what the sign-in
+        // screen adds (MUI's text field), and what the signed-in shell with Today adds (the local
+        // store, sync, the record rules). Neither first screen loads the other's chunk. Other
+        // screens split as the bundler sees fit.
         codeSplitting: {
           groups: [
-            { name: 'core', tags: ['$initial'], priority: 3 },
-            { name: 'sign-in', test: /client[\\/]src[\\/]app[\\/]pages[\\/]sign-in-page\.tsx$/, priority: 2 },
-            { name: 'signed-in', test: /client[\\/]src[\\/]app[\\/]signed-in\.ts$/, priority: 1 },
+            { name: 'core', tags: ['$initial'], priority: 4 },
+            { name: 'first-screens', test: sharedByFirstScreens, priority: 3 },
+            { name: 'sign-in', test: signInScreen, priority: 2 },
+            { name: 'signed-in', test: signedInScreen, priority: 1 },
           ],
         },
       },
