@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { lazy, Suspense, useState } from 'react';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import Typography from '@mui/material/Typography';
@@ -9,11 +9,15 @@ import { useLocalSave } from '@/lib/use-local-save';
 import { useClock } from '../hooks/use-clock';
 import { usePatrolContext } from '../hooks/use-patrol-context';
 import { openTrips, sessionDateOf, signedOn } from '../model/session-day';
-import { signOff } from '../model/writes';
+import { preloadWrites, signOff } from '../model/lazy-writes';
 import { LaunchButton } from './launch-button';
 import { OnWaterBar } from './on-water-bar';
-import { SignOnDialog } from './sign-on-dialog';
 import { SignedOnList } from './signed-on-list';
+
+// The dialog (MUI's dialog, select and menu with it) and its write load when someone signs on,
+// not with Today.
+const loadSignOn = () => import('./sign-on-dialog');
+const SignOnDialog = lazy(() => loadSignOn().then((m) => ({ default: m.SignOnDialog })));
 
 interface Props {
   boat: LocalRecord<'boat'>;
@@ -46,9 +50,9 @@ export function BoatPatrol({ boat, boats, state }: Props) {
       {afloat && <OnWaterBar trip={afloat} p={p} canRetrieve={driver} today={date} />}
       <SignedOnList on={on} date={date} p={p} />
       <Box sx={{ display: 'flex', gap: 1, flexWrap: 'wrap' }}>
-        {!mine && <Button variant="outlined" size="large" onClick={() => setSigningOn(true)} sx={{ minHeight: 48, flex: 1 }}>Sign on to {boat.fields.name}</Button>}
-        {mine && !afloat && <Button size="large" onClick={() => run(() => signOff(p.ctx, mine.id))} sx={{ minHeight: 48 }}>Sign off</Button>}
-        {driver && mine && <Button size="large" onClick={() => setSigningOn(true)} sx={{ minHeight: 48 }}>Sign on someone else</Button>}
+        {!mine && <Button variant="outlined" size="large" onPointerDown={() => void loadSignOn()} onClick={() => setSigningOn(true)} sx={{ minHeight: 48, flex: 1 }}>Sign on to {boat.fields.name}</Button>}
+        {mine && !afloat && <Button size="large" onPointerDown={() => void preloadWrites()} onClick={() => run(() => signOff(p.ctx, mine.id))} sx={{ minHeight: 48 }}>Sign off</Button>}
+        {driver && mine && <Button size="large" onPointerDown={() => void loadSignOn()} onClick={() => setSigningOn(true)} sx={{ minHeight: 48 }}>Sign on someone else</Button>}
       </Box>
       {refusal && <Typography sx={{ color: 'error.main' }}>{refusal}</Typography>}
       {afloat ? null : driver ? (
@@ -60,7 +64,11 @@ export function BoatPatrol({ boat, boats, state }: Props) {
       ) : (
         <Typography variant="body2" sx={{ color: 'text.secondary' }}>A driver logs the launch and retrieval.</Typography>
       )}
-      {signingOn && <SignOnDialog open onClose={() => setSigningOn(false)} boat={boat} boats={boats} date={date} p={p} />}
+      {signingOn && (
+        <Suspense fallback={null}>
+          <SignOnDialog open onClose={() => setSigningOn(false)} boat={boat} boats={boats} date={date} p={p} />
+        </Suspense>
+      )}
     </Box>
   );
 }

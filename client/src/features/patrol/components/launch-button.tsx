@@ -1,18 +1,18 @@
-import { useState } from 'react';
+import { lazy, Suspense, useState } from 'react';
 import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
-import Dialog from '@mui/material/Dialog';
-import DialogActions from '@mui/material/DialogActions';
-import DialogContent from '@mui/material/DialogContent';
-import DialogContentText from '@mui/material/DialogContentText';
-import DialogTitle from '@mui/material/DialogTitle';
 import type { BoatState } from '@breakline/sync-protocol';
 import type { LocalRecord } from '@/db/types';
 import { useLocalSave } from '@/lib/use-local-save';
 import type { PatrolContext } from '../hooks/use-patrol-context';
 import { daylightWarning } from '../model/daylight';
-import { launchTrip, type NewTrip } from '../model/writes';
+import { launchTrip, preloadWrites } from '../model/lazy-writes';
+import type { NewTrip } from '../model/writes';
+
+// Only a stood-down boat asks first, so the dialog loads when it is needed.
+const loadAsk = () => import('./stood-down-launch-dialog');
+const StoodDownLaunchDialog = lazy(() => loadAsk().then((m) => ({ default: m.StoodDownLaunchDialog })));
 
 interface Props {
   boat: LocalRecord<'boat'>;
@@ -28,6 +28,8 @@ interface Props {
  */
 export function LaunchButton({ boat, trip, state, now, p }: Props) {
   const [asking, setAsking] = useState(false);
+  // Once asked, the dialog stays mounted so that it closes with its transition.
+  const [asked, setAsked] = useState(false);
   const { refusal, saving, run } = useLocalSave();
   const dark = daylightWarning(now, p.place);
   const launch = () => run(async () => { await launchTrip(p.ctx, trip); setAsking(false); });
@@ -36,23 +38,19 @@ export function LaunchButton({ boat, trip, state, now, p }: Props) {
     <Box sx={{ display: 'grid', gap: 1 }}>
       {dark && <Alert severity="warning">{dark.replace(/^Launch at/, 'Launching now at')}</Alert>}
       {state === 'unchecked' && <Alert severity="warning">No launch check of {boat.fields.name} today. Run it before the first launch.</Alert>}
-      <Button variant="contained" size="large" disabled={saving} color={stoodDown ? 'error' : 'primary'} onClick={stoodDown ? () => setAsking(true) : launch} sx={{ minHeight: 56 }}>
+      <Button
+        variant="contained" size="large" disabled={saving} color={stoodDown ? 'error' : 'primary'} sx={{ minHeight: 56 }}
+        onPointerDown={() => void (stoodDown ? Promise.all([loadAsk(), preloadWrites()]) : preloadWrites())}
+        onClick={stoodDown ? () => { setAsked(true); setAsking(true); } : launch}
+      >
         {stoodDown ? `${boat.fields.name} is stood down…` : `Launch ${boat.fields.name}`}
       </Button>
       {refusal && <Alert severity="error">{refusal}</Alert>}
-      <Dialog open={asking} onClose={() => setAsking(false)} aria-labelledby="launch-stood-down">
-        <DialogTitle id="launch-stood-down">{boat.fields.name} is stood down</DialogTitle>
-        <DialogContent>
-          <DialogContentText>
-            A stood-down boat is not launched until a competent person returns it to service. Log a launch only if the
-            patrol captain has made that call, for example a rescue with no other boat.
-          </DialogContentText>
-        </DialogContent>
-        <DialogActions>
-          <Button size="large" onClick={() => setAsking(false)}>Do not launch</Button>
-          <Button size="large" color="error" onClick={launch} disabled={saving}>Log the launch</Button>
-        </DialogActions>
-      </Dialog>
+      {asked && (
+        <Suspense fallback={null}>
+          <StoodDownLaunchDialog open={asking} boatName={boat.fields.name} saving={saving} onCancel={() => setAsking(false)} onLaunch={launch} />
+        </Suspense>
+      )}
     </Box>
   );
 }

@@ -10,7 +10,7 @@ import { useClock } from '../hooks/use-clock';
 import type { PatrolContext } from '../hooks/use-patrol-context';
 import { clubTime, onWaterMinutes, timerText } from '../model/trip-times';
 import { PURPOSE_WORDS } from '../model/words';
-import { retrieveTrip } from '../model/writes';
+import { preloadWrites, retrieveTrip } from '../model/lazy-writes';
 
 /** A trip afloat: its running on-water time and the one tap that logs the retrieval. */
 export function OnWaterBar({ trip, p, canRetrieve, today }: { trip: LocalRecord<'trip'>; p: PatrolContext; canRetrieve: boolean; today?: string }) {
@@ -28,7 +28,7 @@ export function OnWaterBar({ trip, p, canRetrieve, today }: { trip: LocalRecord<
       <Typography variant="body2">Launched {clubTime(t.launchedAt, p.zone, today)} · driver {p.nameOf(t.driverId)}</Typography>
       <Box sx={{ display: 'grid', gridTemplateColumns: canRetrieve ? '1fr 1fr' : '1fr', gap: 1 }}>
         {canRetrieve && (
-          <Button variant="contained" color="secondary" size="large" disabled={saving} onClick={() => run(() => retrieveTrip(p.ctx, trip))} sx={{ minHeight: 56 }}>
+          <Button variant="contained" color="secondary" size="large" disabled={saving} onPointerDown={() => void preloadWrites()} onClick={() => run(() => retrieveTrip(p.ctx, trip))} sx={{ minHeight: 56 }}>
             Retrieve now
           </Button>
         )}
