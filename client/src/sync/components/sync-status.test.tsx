@@ -50,7 +50,8 @@ describe('sync status', () => {
     expect(within(button).getByText('2')).toBeInTheDocument();
     const user = userEvent.setup();
     await user.click(button);
-    const dialog = screen.getByRole('dialog', { name: 'Sync' });
+    // The details load on the first tap.
+    const dialog = await screen.findByRole('dialog', { name: 'Sync' });
     expect(within(dialog).getByText('2 changes waiting to be sent')).toBeInTheDocument();
     expect(within(dialog).getByText('Not synced yet on this phone')).toBeInTheDocument();
     expect(within(dialog).getByText(/^No signal\. Changes stay on this phone/)).toBeInTheDocument();
@@ -112,7 +113,7 @@ describe('sync status', () => {
     await act(() => runner.idle());
     act(() => syncActivity.set({ storage: 'refused' }));
     await userEvent.setup().click(await screen.findByRole('button', { name: /^Sync:/ }));
-    expect(screen.getByText(STORAGE_NOT_PERSISTED)).toBeInTheDocument();
+    expect(await screen.findByText(STORAGE_NOT_PERSISTED)).toBeInTheDocument();
     expect(STORAGE_NOT_PERSISTED).toMatch(/may clear changes not yet sent if the phone runs short of space or the app is not used for days/);
   });
 });

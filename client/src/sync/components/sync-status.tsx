@@ -1,14 +1,6 @@
-import { useEffect, useState } from 'react';
-import Alert from '@mui/material/Alert';
+import { lazy, Suspense, useEffect, useState } from 'react';
 import Badge from '@mui/material/Badge';
-import Button from '@mui/material/Button';
-import Dialog from '@mui/material/Dialog';
-import DialogActions from '@mui/material/DialogActions';
-import DialogContent from '@mui/material/DialogContent';
-import DialogTitle from '@mui/material/DialogTitle';
 import IconButton from '@mui/material/IconButton';
-import Stack from '@mui/material/Stack';
-import Typography from '@mui/material/Typography';
 import CloudDoneOutlined from '@mui/icons-material/CloudDoneOutlined';
 import CloudOffOutlined from '@mui/icons-material/CloudOffOutlined';
 import CloudUploadOutlined from '@mui/icons-material/CloudUploadOutlined';
@@ -16,10 +8,13 @@ import SyncOutlined from '@mui/icons-material/SyncOutlined';
 import SyncProblemOutlined from '@mui/icons-material/SyncProblemOutlined';
 import { useReplica } from '@/db/hooks';
 import { syncRunner } from '../index';
-import { STORAGE_NOT_PERSISTED } from '../persist';
 import type { SyncRunner } from '../runner';
-import { dismissRejected, retryPhoto, useSyncStatus, type SyncStatus as Status } from '../status';
-import { conflictsText, headline, lastSyncText, photosWaitingText, progressText, rejectedTitle, waitingText } from '../status-text';
+import { useSyncStatus, type SyncStatus as Status } from '../status';
+import { headline } from '../status-text';
+
+// The details (and MUI's dialog) load on the first tap; the top bar needs only the icon.
+const loadDetails = () => import('./sync-details-dialog');
+const SyncDetailsDialog = lazy(() => loadDetails().then((m) => ({ default: m.SyncDetailsDialog })));
 
 function StatusIcon({ s }: { s: Status }) {
   if (s.running) return <SyncOutlined />;
@@ -44,54 +39,31 @@ export function SyncStatus({ runner = syncRunner }: { runner?: SyncRunner }) {
   const s = useSyncStatus(db, clubId);
   const now = useMinuteClock();
   const [open, setOpen] = useState(false);
+  // Once opened, the dialog stays mounted so that it closes with its transition.
+  const [opened, setOpened] = useState(false);
   useEffect(() => runner.start(), [runner]);
   if (!s) return null;
   const summary = headline(s, now);
-  const conflicts = conflictsText(s.openConflicts);
-  const photos = photosWaitingText(s.photosWaiting);
   return (
     <>
-      <IconButton color="inherit" aria-label={`Sync: ${summary}`} onClick={() => setOpen(true)}>
+      <IconButton
+        color="inherit"
+        aria-label={`Sync: ${summary}`}
+        onPointerDown={() => void loadDetails()}
+        onClick={() => {
+          setOpened(true);
+          setOpen(true);
+        }}
+      >
         <Badge badgeContent={s.waiting + s.photosWaiting} color="secondary" max={999}>
           <StatusIcon s={s} />
         </Badge>
       </IconButton>
-      <Dialog open={open} onClose={() => setOpen(false)} fullWidth maxWidth="xs" aria-labelledby="sync-title">
-        <DialogTitle id="sync-title">Sync</DialogTitle>
-        <DialogContent>
-          <Stack spacing={1.5}>
-            <Typography>{waitingText(s.waiting)}</Typography>
-            {photos && <Typography>{photos}</Typography>}
-            <Typography>{lastSyncText(s.lastSyncAt, now)}</Typography>
-            {progressText(s) && <Typography role="status">{progressText(s)}</Typography>}
-            {s.lastError && <Alert severity={s.lastError.reason === 'offline' ? 'info' : 'warning'}>{s.lastError.message}</Alert>}
-            {conflicts && <Alert severity="info">{conflicts}. Both values are kept until one is chosen at the Review desk.</Alert>}
-            {s.rejected.map((r) => (
-              <Alert
-                key={r.mutationId}
-                severity="error"
-                action={<Button color="inherit" size="small" onClick={() => void dismissRejected(db, r.mutationId)}>Dismiss</Button>}
-              >
-                {rejectedTitle(r)} {r.error.message}
-              </Alert>
-            ))}
-            {s.refusedPhotos.map((p) => (
-              <Alert
-                key={p.sha256}
-                severity="error"
-                action={<Button color="inherit" size="small" onClick={() => void retryPhoto(db, p.sha256).then(() => runner.requestSync())}>Try again</Button>}
-              >
-                A photo was not sent. {p.problem} It stays on this phone.
-              </Alert>
-            ))}
-            {s.storage === 'refused' && <Alert severity="warning">{STORAGE_NOT_PERSISTED}</Alert>}
-          </Stack>
-        </DialogContent>
-        <DialogActions>
-          <Button onClick={() => void runner.requestSync()} disabled={s.running}>Sync now</Button>
-          <Button onClick={() => setOpen(false)}>Close</Button>
-        </DialogActions>
-      </Dialog>
+      {opened && (
+        <Suspense fallback={null}>
+          <SyncDetailsDialog open={open} onClose={() => setOpen(false)} s={s} now={now} db={db} runner={runner} />
+        </Suspense>
+      )}
     </>
   );
 }

@@ -1,0 +1,66 @@
+import Alert from '@mui/material/Alert';
+import Button from '@mui/material/Button';
+import Dialog from '@mui/material/Dialog';
+import DialogActions from '@mui/material/DialogActions';
+import DialogContent from '@mui/material/DialogContent';
+import DialogTitle from '@mui/material/DialogTitle';
+import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
+import type { ReplicaDb } from '@/db/schema';
+import { STORAGE_NOT_PERSISTED } from '../persist';
+import type { SyncRunner } from '../runner';
+import { dismissRejected, retryPhoto, type SyncStatus as Status } from '../status';
+import { conflictsText, lastSyncText, photosWaitingText, progressText, rejectedTitle, waitingText } from '../status-text';
+
+interface Props {
+  open: boolean;
+  onClose: () => void;
+  s: Status;
+  now: number;
+  db: ReplicaDb;
+  runner: SyncRunner;
+}
+
+/** The sync details behind the top bar's status: what waits, when it last synced, what went wrong. */
+export function SyncDetailsDialog({ open, onClose, s, now, db, runner }: Props) {
+  const conflicts = conflictsText(s.openConflicts);
+  const photos = photosWaitingText(s.photosWaiting);
+  return (
+    <Dialog open={open} onClose={onClose} fullWidth maxWidth="xs" aria-labelledby="sync-title">
+      <DialogTitle id="sync-title">Sync</DialogTitle>
+      <DialogContent>
+        <Stack spacing={1.5}>
+          <Typography>{waitingText(s.waiting)}</Typography>
+          {photos && <Typography>{photos}</Typography>}
+          <Typography>{lastSyncText(s.lastSyncAt, now)}</Typography>
+          {progressText(s) && <Typography role="status">{progressText(s)}</Typography>}
+          {s.lastError && <Alert severity={s.lastError.reason === 'offline' ? 'info' : 'warning'}>{s.lastError.message}</Alert>}
+          {conflicts && <Alert severity="info">{conflicts}. Both values are kept until one is chosen at the Review desk.</Alert>}
+          {s.rejected.map((r) => (
+            <Alert
+              key={r.mutationId}
+              severity="error"
+              action={<Button color="inherit" size="small" onClick={() => void dismissRejected(db, r.mutationId)}>Dismiss</Button>}
+            >
+              {rejectedTitle(r)} {r.error.message}
+            </Alert>
+          ))}
+          {s.refusedPhotos.map((p) => (
+            <Alert
+              key={p.sha256}
+              severity="error"
+              action={<Button color="inherit" size="small" onClick={() => void retryPhoto(db, p.sha256).then(() => runner.requestSync())}>Try again</Button>}
+            >
+              A photo was not sent. {p.problem} It stays on this phone.
+            </Alert>
+          ))}
+          {s.storage === 'refused' && <Alert severity="warning">{STORAGE_NOT_PERSISTED}</Alert>}
+        </Stack>
+      </DialogContent>
+      <DialogActions>
+        <Button onClick={() => void runner.requestSync()} disabled={s.running}>Sync now</Button>
+        <Button onClick={onClose}>Close</Button>
+      </DialogActions>
+    </Dialog>
+  );
+}
