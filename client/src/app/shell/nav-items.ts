@@ -13,6 +13,9 @@ import type { Role } from '@/features/auth/api/types';
 import { canAdminister, canUseReviewDesk } from '@/features/auth/roles';
 import { paths, type RouteName } from '../paths';
 
+/** The desktop side drawer's width (the phone has the bottom bar instead). */
+export const DRAWER_WIDTH = 248;
+
 export interface NavItem {
   route: RouteName;
   label: string;

@@ -6,9 +6,7 @@ import ListItemText from '@mui/material/ListItemText';
 import Toolbar from '@mui/material/Toolbar';
 import { Link as RouterLink } from 'react-router-dom';
 import { paths, type RouteName } from '../paths';
-import type { NavItem } from './nav-items';
-
-export const DRAWER_WIDTH = 248;
+import { DRAWER_WIDTH, type NavItem } from './nav-items';
 
 export function SideDrawer({ items, active }: { items: NavItem[]; active: RouteName | null }) {
   return (
