@@ -1,14 +1,14 @@
-import { useState } from 'react';
-import { RouterProvider } from 'react-router-dom';
+import { BrowserRouter } from 'react-router-dom';
 import { AppProviders } from './providers';
-import { createAppRouter } from './router';
+import { AppRoutes } from './router';
 import { UpdatePrompt } from './update-prompt';
 
 export function App() {
-  const [router] = useState(createAppRouter);
   return (
     <AppProviders>
-      <RouterProvider router={router} />
+      <BrowserRouter>
+        <AppRoutes />
+      </BrowserRouter>
       <UpdatePrompt />
     </AppProviders>
   );
