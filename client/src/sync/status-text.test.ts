@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { headline, lastSyncText, photosWaitingText, progressText, rejectedTitle, relativeTime, waitingText } from './status-text';
+import { rejectedTitle } from './rejected-title';
+import { headline, lastSyncText, photosWaitingText, progressText, relativeTime, waitingText } from './status-text';
 import type { SyncStatus } from './status';
 
 const NOW = Date.parse('2026-12-06T09:00:00Z');

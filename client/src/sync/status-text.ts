@@ -1,5 +1,4 @@
-import { fieldLabel, kindRules } from '@breakline/sync-protocol';
-import type { FailureReason, RejectedRow } from '@/db/types';
+import type { FailureReason } from '@/db/types';
 import type { SyncStatus } from './status';
 
 const FAILURE_HEADLINE: Record<FailureReason, string> = {
@@ -63,13 +62,4 @@ export function headline(s: SyncStatus, now: number): string {
     photosWaitingText(s.photosWaiting) ??
     lastSyncText(s.lastSyncAt, now)
   );
-}
-
-/** "Your change to a defect (status, notes) was not saved." */
-export function rejectedTitle(r: RejectedRow): string {
-  const what = kindRules(r.kind).label;
-  if (r.deleted) return `Deleting ${what} was not done.`;
-  const fields = Object.keys(r.patch).map((f) => fieldLabel([f]));
-  const list = fields.length > 0 && fields.length <= 4 ? ` (${fields.join(', ')})` : '';
-  return `Your change to ${what}${list} was not saved.`;
 }

@@ -10,7 +10,8 @@ import type { ReplicaDb } from '@/db/schema';
 import { STORAGE_NOT_PERSISTED } from '../persist';
 import type { SyncRunner } from '../runner';
 import { dismissRejected, retryPhoto, type SyncStatus as Status } from '../status';
-import { conflictsText, lastSyncText, photosWaitingText, progressText, rejectedTitle, waitingText } from '../status-text';
+import { rejectedTitle } from '../rejected-title';
+import { conflictsText, lastSyncText, photosWaitingText, progressText, waitingText } from '../status-text';
 
 interface Props {
   open: boolean;
