@@ -54,7 +54,7 @@ const pwa = VitePWA({
 const signInScreen = /client[\\/]src[\\/]app[\\/]pages[\\/]sign-in-page\.tsx$/;
 const signedInScreen = /client[\\/]src[\\/]app[\\/]signed-in\.ts$/;
 const sharedByFirstScreens =
-  /@mui[\\/](material[\\/](Alert|IconButton|List|ListItemButton|Paper|SvgIcon)|system[\\/]useThemeProps)[\\/]|client[\\/]src[\\/]features[\\/]auth[\\/]members[\\/]auth-lock\.ts$/;
+  /@mui[\\/](material[\\/](Alert|IconButton|List|Paper|SvgIcon)|system[\\/]useThemeProps)[\\/]|client[\\/]src[\\/]features[\\/]auth[\\/]members[\\/]auth-lock\.ts$/;
 
 /**
  * Fails the build when one first screen's chunk imports the other's: a signed-in phone would
