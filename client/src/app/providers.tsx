@@ -1,10 +1,10 @@
-import { useState, type ReactNode } from 'react';
-import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
+import type { ReactNode } from 'react';
+import type { QueryClient } from '@tanstack/react-query';
 import { bindApiAuth } from '@/lib/api-client';
-import { useMe } from '@/features/auth/api/me';
+import { useMeRefresh } from '@/features/auth/api/me';
 import { apiAuth } from '@/features/auth/session';
 import { useAuthState } from '@/features/auth/use-auth';
-import { createQueryClient } from './query-client';
+import { QueryClientChoice } from './query-client-choice';
 import { ThemeModeProvider } from './theme-mode';
 
 // The API client gets its tokens from the auth feature; bound once, before anything renders.
@@ -13,17 +13,17 @@ bindApiAuth(apiAuth);
 /** Refreshes the stored `me` answer in the background whenever someone is signed in. */
 function AuthRefresh({ children }: { children: ReactNode }) {
   const { session } = useAuthState();
-  useMe(session !== null);
+  useMeRefresh(session?.user.id ?? null);
   return children;
 }
 
+/** `queryClient`: the cache the screens use instead of the app's own (a test's fresh one). */
 export function AppProviders({ children, queryClient }: { children: ReactNode; queryClient?: QueryClient }) {
-  const [client] = useState(() => queryClient ?? createQueryClient());
   return (
-    <QueryClientProvider client={client}>
+    <QueryClientChoice.Provider value={queryClient ?? null}>
       <ThemeModeProvider>
         <AuthRefresh>{children}</AuthRefresh>
       </ThemeModeProvider>
-    </QueryClientProvider>
+    </QueryClientChoice.Provider>
   );
 }

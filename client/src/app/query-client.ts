@@ -12,3 +12,10 @@ export function createQueryClient(): QueryClient {
     },
   });
 }
+
+let shared: QueryClient | null = null;
+
+/** The app's one query cache, made when the first screen that asks the server opens. */
+export function appQueryClient(): QueryClient {
+  return (shared ??= createQueryClient());
+}

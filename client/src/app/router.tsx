@@ -14,9 +14,22 @@ const signedIn = () => import('./signed-in');
 const AppShell = lazy(() => signedIn().then((m) => ({ default: m.AppShell })));
 const TodayPage = lazy(() => signedIn().then((m) => ({ default: m.TodayPage })));
 
-/** The element of a screen in its own chunk: `load` imports the module, `name` is its export. */
+/**
+ * The element of a screen in its own chunk: `load` imports the module, `name` is its export.
+ * The screen gets the query cache with it (see with-queries.tsx).
+ */
 function screen<K extends string>(load: () => Promise<Record<K, ComponentType>>, name: K) {
-  const Screen = lazy(async (): Promise<{ default: ComponentType }> => ({ default: (await load())[name] }));
+  const Screen = lazy(async (): Promise<{ default: ComponentType }> => {
+    const [module, { WithQueries }] = await Promise.all([load(), import('./with-queries')]);
+    const Page: ComponentType = module[name];
+    return {
+      default: () => (
+        <WithQueries>
+          <Page />
+        </WithQueries>
+      ),
+    };
+  });
   return <Screen />;
 }
 

@@ -1,6 +1,6 @@
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import { getMe, meQueryKey } from '@/features/auth/api/me';
+import { getMe } from '@/features/auth/api/me';
 
 export interface ClubSettings {
   name: string;
@@ -14,11 +14,10 @@ export interface ClubSettings {
 
 /** Saves the club's settings, then refreshes the session so this device uses them at once. */
 export function useSaveClubSettings() {
-  const qc = useQueryClient();
   return useMutation({
     mutationFn: (settings: Partial<ClubSettings>) => apiRequest<ClubSettings>('/api/clubs/current', { method: 'PATCH', body: settings }),
     onSuccess: async () => {
-      await qc.fetchQuery({ queryKey: meQueryKey, queryFn: getMe, staleTime: 0 });
+      await getMe();
     },
   });
 }
