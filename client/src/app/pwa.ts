@@ -1,5 +1,3 @@
-import type { Workbox } from 'workbox-window';
-
 /** A waiting service worker: calling `apply` activates it and reloads the page. */
 export interface PendingUpdate {
   apply: () => void;
@@ -21,27 +19,40 @@ export const pwaUpdates = {
   },
 };
 
-let workbox: Workbox | null = null;
+let registration: ServiceWorkerRegistration | null = null;
+
+/** Offers `worker`, installed and waiting: applying it tells it to take over, then reloads. */
+function offer(worker: ServiceWorker): void {
+  pwaUpdates.announce({
+    apply: () => {
+      navigator.serviceWorker.addEventListener('controllerchange', () => window.location.reload(), { once: true });
+      // The generated worker (vite-plugin-pwa, prompt mode) skips waiting on this message.
+      worker.postMessage({ type: 'SKIP_WAITING' });
+    },
+  });
+}
 
 /**
- * Registers /sw.js (built by vite-plugin-pwa in prompt mode). A new worker waits until the person
- * chooses to reload, so a check half filled in is never reloaded away under them.
+ * Registers /sw.js (built by vite-plugin-pwa in prompt mode) with the browser's own API, which is
+ * all this needs (a library for it was a request and 2 kB more on the first screen). A new
+ * worker waits until the person chooses to reload, so a check half filled in is never reloaded
+ * away under them. The first worker on a phone has nothing to replace, so it is not offered.
  */
 export async function registerServiceWorker(): Promise<void> {
   if (!import.meta.env.PROD || !('serviceWorker' in navigator)) return;
-  // Loaded after the first screen: nothing on it waits for the worker.
-  const { Workbox } = await import('workbox-window');
-  const wb = new Workbox('/sw.js', { scope: '/' });
-  wb.addEventListener('waiting', () => {
-    pwaUpdates.announce({
-      apply: () => {
-        wb.addEventListener('controlling', () => window.location.reload());
-        wb.messageSkipWaiting();
-      },
+  // After the page's load event, so the precache downloads do not compete with the first screen.
+  if (document.readyState !== 'complete') await new Promise((resolve) => window.addEventListener('load', resolve, { once: true }));
+  const { serviceWorker } = navigator;
+  const reg = await serviceWorker.register('/sw.js', { scope: '/' });
+  registration = reg;
+  // A worker installed on an earlier visit may still be waiting for its reload.
+  if (reg.waiting && serviceWorker.controller) offer(reg.waiting);
+  reg.addEventListener('updatefound', () => {
+    const installing = reg.installing;
+    installing?.addEventListener('statechange', () => {
+      if (installing.state === 'installed' && serviceWorker.controller) offer(installing);
     });
   });
-  workbox = wb;
-  void wb.register();
   // Phones stay open for days: look for a new version whenever the app comes back to the front.
   document.addEventListener('visibilitychange', () => {
     if (document.visibilityState === 'visible') void checkForUpdate();
@@ -50,9 +61,9 @@ export async function registerServiceWorker(): Promise<void> {
 
 /** Ask the server for a newer service worker now (e.g. after the server answered 426). */
 export async function checkForUpdate(): Promise<void> {
-  if (!workbox || !navigator.onLine) return;
+  if (!registration || !navigator.onLine) return;
   try {
-    await workbox.update();
+    await registration.update();
   } catch {
     // Offline or the server is down: the next visibility change tries again.
   }
