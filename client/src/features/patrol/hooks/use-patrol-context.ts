@@ -1,8 +1,7 @@
 import { useMemo } from 'react';
 import { useRecords, useReplica } from '@/db/hooks';
 import { useSession } from '@/features/auth/use-auth';
-import { awardRule, clubPlace } from '../model/club-place';
-import { clubWindUnit } from '../model/conditions';
+import { awardRule, clubPlace, clubWindUnit } from '../model/club-place';
 import { cardsByMember, memberName } from '../model/members';
 
 /** The club's place, rules and member cards, and who is looking: what every patrol screen needs. */

@@ -1,3 +1,4 @@
+import { WIND_SPEED_UNITS, type WindSpeedUnit } from '@breakline/sync-protocol';
 import type { ActiveClub } from '@/features/auth/api/types';
 
 /** Where and in which zone the club patrols, as the session knows it. */
@@ -20,4 +21,12 @@ export function clubPlace(club: ActiveClub): ClubPlace {
 /** The club's choice for a sign-on without a current award; warn unless the club chose to block. */
 export function awardRule(club: ActiveClub): 'warn' | 'block' {
   return club.awardCheck === 'block' ? 'block' : 'warn';
+}
+
+/**
+ * The club's wind unit; one the app does not know is shown and typed in knots. Here with the
+ * club's other settings rather than with the wind words, which Today does not show.
+ */
+export function clubWindUnit(value: string | undefined): WindSpeedUnit {
+  return (WIND_SPEED_UNITS as readonly string[]).includes(value ?? '') ? (value as WindSpeedUnit) : 'kn';
 }

@@ -1,11 +1,4 @@
-import {
-  describeSeaState, describeWind, fromKnots, toKnots, WIND_SPEED_UNITS, type WindSpeedUnit,
-} from '@breakline/sync-protocol';
-
-/** The club's wind unit; one the app does not know is shown and typed in knots. */
-export function clubWindUnit(value: string | undefined): WindSpeedUnit {
-  return (WIND_SPEED_UNITS as readonly string[]).includes(value ?? '') ? (value as WindSpeedUnit) : 'kn';
-}
+import { describeSeaState, describeWind, fromKnots, toKnots, type WindSpeedUnit } from '@breakline/sync-protocol';
 
 const POINTS = ['N', 'NNE', 'NE', 'ENE', 'E', 'ESE', 'SE', 'SSE', 'S', 'SSW', 'SW', 'WSW', 'W', 'WNW', 'NW', 'NNW'];
 
