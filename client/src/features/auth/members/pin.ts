@@ -54,11 +54,3 @@ export async function verifyPin(pin: string, stored: PinHash): Promise<boolean> 
   for (let i = 0; i < expected.length; i++) diff |= expected[i]! ^ (actual[i] ?? 0);
   return diff === 0;
 }
-
-export function isPinHash(v: unknown): v is PinHash {
-  const p = v as PinHash | null;
-  return (
-    typeof p === 'object' && p !== null && p.algorithm === 'PBKDF2-SHA-256' && Number.isInteger(p.iterations) && p.iterations > 0 &&
-    typeof p.salt === 'string' && typeof p.hash === 'string'
-  );
-}

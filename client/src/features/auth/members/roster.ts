@@ -1,8 +1,8 @@
 import { isSessionAnswer } from '../api/parse';
 import type { Role } from '../api/types';
 import type { StoredSession } from '../token-store';
-import { NO_TRIES, type PinTries } from './lockout';
-import { isPinHash, type PinHash } from './pin';
+import type { PinTries } from './lockout';
+import type { PinHash } from './pin';
 
 /**
  * A member signed in on this device. The active member's tokens live in the token store; the
@@ -27,6 +27,16 @@ export interface DeviceMember {
 export const MEMBERS_KEY = 'breakline.device-members.v1';
 
 const roles: readonly string[] = ['crew', 'driver', 'supervisor', 'admin'];
+
+// The stored entry's shape is checked here, not with the PIN hashing and lockout rules: the
+// roster loads with every screen, those only with the screens that ask for a PIN.
+function isPinHash(v: unknown): v is PinHash {
+  const p = v as PinHash | null;
+  return (
+    typeof p === 'object' && p !== null && p.algorithm === 'PBKDF2-SHA-256' && Number.isInteger(p.iterations) && p.iterations > 0 &&
+    typeof p.salt === 'string' && typeof p.hash === 'string'
+  );
+}
 
 function isTries(v: unknown): v is PinTries {
   const t = v as PinTries | null;
@@ -81,7 +91,7 @@ export function memberFrom(session: StoredSession): DeviceMember {
     clubName: session.activeClub.name,
     role: session.activeClub.role,
     pin: null,
-    tries: NO_TRIES,
+    tries: { wrong: 0, lockedUntil: null }, // NO_TRIES, written out so the roster loads no lockout rules
     session: null,
   };
 }
