@@ -1,10 +1,10 @@
+import { countPhotosIn } from '@/db/photos';
 import { updateClubState } from '@/db/replica-state';
 import type { ReplicaDb } from '@/db/schema';
 import type { SyncFailure } from '@/db/types';
 import { ScopeChangedError } from './auth-source';
 import { describeFailure } from './failure';
 import type { ProgressListener } from './progress';
-import { uploadPhotos } from './photo-upload';
 import { pullAll } from './pull';
 import { pushOutbox } from './push';
 import { syncRequest, type TransportContext } from './transport';
@@ -46,7 +46,8 @@ export async function syncOnce(ctx: SyncContext): Promise<SyncOutcome> {
     const status = await syncRequest<StatusAnswer>(ctx, '/api/sync/status');
     const openConflicts = typeof status?.openConflicts === 'number' ? status.openConflicts : undefined;
     await updateClubState(db, scope.clubId, { lastSyncAt: stamp(), lastError: null, openConflicts });
-    await uploadPhotos(ctx);
+    // The upload's code loads only when a photo waits to go: most syncs send none.
+    if ((await countPhotosIn(db, scope.clubId, 'due')) > 0) await (await import('./photo-upload')).uploadPhotos(ctx);
     return { ok: true };
   } catch (error) {
     if (error instanceof ScopeChangedError) return { ok: false, scopeChanged: true };

@@ -1,6 +1,6 @@
 import { isApiError } from '@/lib/api-error';
 import type { SyncFailure } from '@/db/types';
-import { PhotoStoreUnavailableError } from './photo-upload';
+import { PhotoStoreUnavailableError } from './photo-store-error';
 import { SignedOutError } from './transport';
 
 function isStorageFull(error: unknown): boolean {

@@ -2,6 +2,7 @@ import { markPhotoRefused, markPhotoSent, photoBlob, photoIdsIn } from '@/db/pho
 import type { ReplicaDb } from '@/db/schema';
 import type { PhotoRow } from '@/db/types';
 import { parseErrorBody } from '@/lib/parse-error-body';
+import { PhotoStoreUnavailableError } from './photo-store-error';
 import { photoRefs } from './photo-refs';
 import type { ProgressListener } from './progress';
 import { authorizedSend, type TransportContext } from './transport';
@@ -12,14 +13,6 @@ export const PHOTO_FIELD = 'file';
 export interface UploadContext extends TransportContext {
   db: ReplicaDb;
   onProgress?: ProgressListener;
-}
-
-/** The photo store is down (503): no photo can be sent now, so the queue stops and retries later. */
-export class PhotoStoreUnavailableError extends Error {
-  constructor(serverMessage: string) {
-    super(serverMessage);
-    this.name = 'PhotoStoreUnavailableError';
-  }
 }
 
 /** Said when the server refuses a photo for good and did not say why in its own words. */
