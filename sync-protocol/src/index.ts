@@ -6,6 +6,7 @@ export * from './deep-equal.js';
 export * from './kinds.js';
 export * from './kind-rules.js';
 export * from './kinds/spec.js';
+export * from './kinds/values.js';
 export type { NoteEntry } from './kinds/common.js';
 export * from './kinds/boat.js';
 export * from './kinds/boat-rules.js';
@@ -45,7 +46,6 @@ export * from './apply/apply-mutation.js';
 export * from './apply/settle.js';
 export * from './testing/memory-server.js';
 // The record kinds are the contract for these names; derive/ declares the same values.
-export { TRIP_PURPOSES, type TripPurpose } from './kinds/trip-rules.js';
-export { OPEN_DEFECT_STATUSES } from './kinds/defect-rules.js';
+export { TRIP_PURPOSES, type TripPurpose, OPEN_DEFECT_STATUSES } from './kinds/values.js';
 export * from './templates/index.js';
 export * from './derive/index.js';

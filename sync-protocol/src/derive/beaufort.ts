@@ -1,7 +1,7 @@
 import { requireNonNegative, requireOneOf } from './assert.js';
+import { WIND_SPEED_UNITS, type WindSpeedUnit } from './wind-units.js';
 
-export type WindSpeedUnit = 'kn' | 'm/s' | 'km/h';
-export const WIND_SPEED_UNITS: readonly WindSpeedUnit[] = ['kn', 'm/s', 'km/h'];
+export type { WindSpeedUnit };
 
 /** The international knot, exactly 1852 m per hour. */
 export const METRES_PER_SECOND_PER_KNOT = 1852 / 3600;

@@ -1,5 +1,6 @@
 export * from './pressure.js';
 export * from './beaufort.js';
+export { WIND_SPEED_UNITS } from './wind-units.js';
 export * from './sea-state.js';
 export * from './sun.js';
 export * from './time.js';

@@ -1,7 +1,7 @@
 import type { BoatFields } from './boat.js';
-import { defineRules } from './spec.js';
+import type { KindRules } from './spec.js';
 
-export const boatRules = defineRules<BoatFields>({
+export const boatRules: KindRules<BoatFields> = {
   label: 'a boat',
   access: { create: 'supervisor', update: 'supervisor', delete: 'admin' },
   recordChecks: (b) => {
@@ -9,4 +9,4 @@ export const boatRules = defineRules<BoatFields>({
     const dup = ids.find((id, i) => ids.indexOf(id) !== i);
     return dup === undefined ? [] : [{ field: 'airChambers', message: `Air chamber id "${dup}" is used twice.` }];
   },
-});
+};

@@ -1,11 +1,8 @@
 import { roleAtLeast } from '../roles.js';
 import type { CheckFields } from './check.js';
-import { defineRules } from './spec.js';
+import type { KindRules } from './spec.js';
 
-export const CHECK_OUTCOMES = ['pass', 'fail', 'na'] as const;
-export type CheckOutcome = (typeof CHECK_OUTCOMES)[number];
-
-export const checkRules = defineRules<CheckFields>({
+export const checkRules: KindRules<CheckFields> = {
   label: 'a check',
   merge: { results: 'check-results' },
   immutable: ['boatId', 'checkType', 'templateId', 'templateVersion', 'performedBy'],
@@ -28,4 +25,4 @@ export const checkRules = defineRules<CheckFields>({
     current.signedOffAt !== null && !roleAtLeast(role, 'supervisor')
       ? 'This check has been signed off; only a supervisor or admin may change it now.'
       : null,
-});
+};

@@ -1,11 +1,8 @@
 import type { CheckTemplateFields } from './check-template.js';
-import { defineRules } from './spec.js';
-
-export const CHECK_TYPES = ['launch', 'stow'] as const;
-export const CHECK_ITEM_KINDS = ['pass-fail', 'count', 'reading', 'text', 'photo'] as const;
+import type { KindRules } from './spec.js';
 
 /** A saved version's content is fixed (an edit is a new version); only `retired` may change. */
-export const checkTemplateRules = defineRules<CheckTemplateFields>({
+export const checkTemplateRules: KindRules<CheckTemplateFields> = {
   label: 'a check template',
   immutable: ['checkType', 'name', 'templateVersion', 'sections'],
   // Club set-up is the admin's; supervisors run the checks and defects made from it.
@@ -15,4 +12,4 @@ export const checkTemplateRules = defineRules<CheckTemplateFields>({
     const dup = ids.find((id, i) => ids.indexOf(id) !== i);
     return dup === undefined ? [] : [{ field: 'sections', message: `Item id "${dup}" is used twice.` }];
   },
-});
+};

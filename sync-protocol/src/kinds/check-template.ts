@@ -1,7 +1,8 @@
 import { z } from 'zod';
-import { CHECK_ITEM_KINDS, CHECK_TYPES, checkTemplateRules } from './check-template-rules.js';
+import { checkTemplateRules } from './check-template-rules.js';
 import { label, text } from './common.js';
 import { defineKind } from './spec.js';
+import { CHECK_ITEM_KINDS, CHECK_TYPES } from './values.js';
 
 const item = z
   .strictObject({

@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { CHECK_OUTCOMES, checkRules } from './check-rules.js';
-import { CHECK_TYPES } from './check-template-rules.js';
+import { checkRules } from './check-rules.js';
 import { memberId, recordId, sha256, text, utcTime } from './common.js';
 import { defineKind } from './spec.js';
+import { CHECK_OUTCOMES, CHECK_TYPES } from './values.js';
 
 const itemResult = z.strictObject({
   outcome: z.enum(CHECK_OUTCOMES),

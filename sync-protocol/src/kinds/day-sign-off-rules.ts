@@ -1,8 +1,8 @@
 import type { DaySignOffFields } from './day-sign-off.js';
-import { defineRules } from './spec.js';
+import type { KindRules } from './spec.js';
 
-export const daySignOffRules = defineRules<DaySignOffFields>({
+export const daySignOffRules: KindRules<DaySignOffFields> = {
   label: "a day's sign-off",
   immutable: ['sessionDate', 'boatId'],
   access: { create: 'driver', update: 'driver', delete: 'supervisor', selfFields: ['signedOffBy'] },
-});
+};

@@ -1,15 +1,9 @@
 import { roleAtLeast } from '../roles.js';
 import type { DefectFields } from './defect.js';
-import { defineRules } from './spec.js';
+import type { KindRules } from './spec.js';
+import { DEFECT_SEVERITIES, type DefectSeverity } from './values.js';
 
-export const DEFECT_SEVERITIES = ['stand-down', 'limit', 'note'] as const;
-export const DEFECT_STATUSES = ['open', 'assigned', 'repaired', 'verified', 'rejected'] as const;
-export type DefectSeverity = (typeof DEFECT_SEVERITIES)[number];
-export type DefectStatus = (typeof DEFECT_STATUSES)[number];
-/** Statuses under which the defect still counts against the boat. */
-export const OPEN_DEFECT_STATUSES: readonly DefectStatus[] = ['open', 'assigned', 'repaired'];
-
-export const defectRules = defineRules<DefectFields>({
+export const defectRules: KindRules<DefectFields> = {
   label: 'a defect',
   merge: { photos: 'union', notes: 'union', status: 'defect-status' },
   immutable: ['boatId', 'checkId', 'itemId', 'reportedBy', 'reportedAt'],
@@ -46,4 +40,4 @@ export const defectRules = defineRules<DefectFields>({
       ? "Only a supervisor or admin may lower a defect's severity."
       : null;
   },
-});
+};

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { label, memberId, noteEntry, recordId, sha256, text, utcTime } from './common.js';
-import { DEFECT_SEVERITIES, DEFECT_STATUSES, defectRules } from './defect-rules.js';
+import { defectRules } from './defect-rules.js';
 import { defineKind } from './spec.js';
+import { DEFECT_SEVERITIES, DEFECT_STATUSES } from './values.js';
 
 const defectSchema = z.strictObject({
   boatId: recordId(),

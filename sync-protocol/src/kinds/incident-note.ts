@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { memberId, recordId, text, utcTime } from './common.js';
-import { INCIDENT_KINDS, incidentNoteRules } from './incident-note-rules.js';
+import { incidentNoteRules } from './incident-note-rules.js';
 import { defineKind } from './spec.js';
+import { INCIDENT_KINDS } from './values.js';
 
 const incidentNoteSchema = z.strictObject({
   tripId: recordId().nullable(),

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { label, localDate, memberId } from './common.js';
-import { AWARD_ROLES, memberRules } from './member-rules.js';
+import { memberRules } from './member-rules.js';
 import { defineKind } from './spec.js';
+import { AWARD_ROLES } from './values.js';
 
 const award = z
   .strictObject({

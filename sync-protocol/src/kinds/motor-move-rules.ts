@@ -1,7 +1,7 @@
 import type { MotorMoveFields } from './motor-move.js';
-import { defineRules } from './spec.js';
+import type { KindRules } from './spec.js';
 
-export const motorMoveRules = defineRules<MotorMoveFields>({
+export const motorMoveRules: KindRules<MotorMoveFields> = {
   label: 'a motor move',
   immutable: ['motorId', 'movedBy'],
   access: { create: 'driver', update: 'supervisor', delete: 'supervisor', selfFields: ['movedBy'] },
@@ -9,4 +9,4 @@ export const motorMoveRules = defineRules<MotorMoveFields>({
     m.fromBoatId === m.toBoatId
       ? [{ field: 'toBoatId', message: 'The motor must move to a different boat (or to the store).' }]
       : [],
-});
+};

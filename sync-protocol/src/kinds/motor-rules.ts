@@ -1,7 +1,7 @@
 import type { MotorFields } from './motor.js';
-import { defineRules } from './spec.js';
+import type { KindRules } from './spec.js';
 
-export const motorRules = defineRules<MotorFields>({
+export const motorRules: KindRules<MotorFields> = {
   label: 'a motor',
   // Drivers read the hour meter after a trip; everything else is the gear officer's.
   access: {
@@ -20,4 +20,4 @@ export const motorRules = defineRules<MotorFields>({
     }
     return errors;
   },
-});
+};

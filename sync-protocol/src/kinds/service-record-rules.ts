@@ -1,8 +1,8 @@
 import type { ServiceRecordFields } from './service-record.js';
-import { defineRules } from './spec.js';
+import type { KindRules } from './spec.js';
 
-export const serviceRecordRules = defineRules<ServiceRecordFields>({
+export const serviceRecordRules: KindRules<ServiceRecordFields> = {
   label: 'a service record',
   immutable: ['motorId'],
   access: { create: 'supervisor', update: 'supervisor', delete: 'admin' },
-});
+};

@@ -1,7 +1,7 @@
 import type { SignOnFields } from './sign-on.js';
-import { defineRules } from './spec.js';
+import type { KindRules } from './spec.js';
 
-export const signOnRules = defineRules<SignOnFields>({
+export const signOnRules: KindRules<SignOnFields> = {
   label: 'a sign-on',
   immutable: ['boatId', 'memberId', 'sessionDate'],
   access: { create: 'crew', update: 'crew', delete: 'driver' },
@@ -9,4 +9,4 @@ export const signOnRules = defineRules<SignOnFields>({
     s.signedOffAt !== null && Date.parse(s.signedOffAt) < Date.parse(s.signedOnAt)
       ? [{ field: 'signedOffAt', message: 'Signed off must not be before signed on.' }]
       : [],
-});
+};

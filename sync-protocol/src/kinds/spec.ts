@@ -50,7 +50,8 @@ export interface UpdateContext<T> {
  * A kind's rules apart from its fields' schema: its name, merge rules, fixed fields, who may do
  * what, and checks across fields. They live apart from the schemas (and zod) so that code that
  * only reads records or asks who may change them, such as a phone's first screen, does not load
- * the validator with them.
+ * the validator with them. Each kind's rules are a plain object typed `KindRules<ItsFields>`
+ * (no call around it, so a bundle that uses none of a file's rules leaves them out).
  */
 export interface KindRules<T extends object = Record<string, unknown>> {
   /** The kind's name in messages: "a defect", "a check template". */
@@ -69,11 +70,6 @@ export interface KindRules<T extends object = Record<string, unknown>> {
 export interface KindSpec<Shape extends z.ZodRawShape = z.ZodRawShape>
   extends KindRules<z.infer<z.ZodObject<Shape, z.core.$strict>>> {
   schema: z.ZodObject<Shape, z.core.$strict>;
-}
-
-/** Identity with type inference, so each kind's rules are checked against its own fields. */
-export function defineRules<T extends object>(rules: KindRules<T>): KindRules<T> {
-  return rules;
 }
 
 /** Identity with type inference: a kind's rules joined to the schema they were checked against. */

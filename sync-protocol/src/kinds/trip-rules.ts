@@ -1,19 +1,7 @@
-import type { FieldError } from './spec.js';
-import { defineRules } from './spec.js';
+import type { FieldError, KindRules } from './spec.js';
 import type { TripFields } from './trip.js';
 
-export const TRIP_PURPOSES = [
-  'patrol',
-  'training',
-  'rescue',
-  'search',
-  'preventive-action',
-  'event-support',
-  'maintenance-run',
-] as const;
-export type TripPurpose = (typeof TRIP_PURPOSES)[number];
-
-export const tripRules = defineRules<TripFields>({
+export const tripRules: KindRules<TripFields> = {
   label: 'a trip',
   merge: { crewIds: 'union', notes: 'union', editReasons: 'union' },
   immutable: ['boatId'],
@@ -28,4 +16,4 @@ export const tripRules = defineRules<TripFields>({
     }
     return errors;
   },
-});
+};

@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { atLeastZero, memberId, noteEntry, recordId, utcTime } from './common.js';
 import { defineKind } from './spec.js';
-import { TRIP_PURPOSES, tripRules } from './trip-rules.js';
+import { tripRules } from './trip-rules.js';
+import { TRIP_PURPOSES } from './values.js';
 
 const tripSchema = z.strictObject({
   boatId: recordId(),
