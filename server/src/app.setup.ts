@@ -25,8 +25,9 @@ export function configureApp(app: NestExpressApplication, env: Env) {
     },
   }));
   // Answers go compressed to a browser that asks: a first sync's pull pages are megabytes of
-  // JSON that shrink to about a tenth, which is most of the wait on a clubhouse Wi-Fi.
-  app.use(compression());
+  // JSON that shrink to about a tenth, which is most of the wait on a clubhouse Wi-Fi. A push's
+  // answer is a short list of results, not worth the server's time while it takes the next batch.
+  app.use(compression({ filter: (req, res) => !req.path.startsWith('/api/sync/push') && compression.filter(req, res) }));
   // Push bodies may arrive gzip-encoded; the limit applies to the inflated JSON.
   app.useBodyParser('json', { limit: `${env.REQUEST_BODY_LIMIT_MB}mb`, inflate: true });
   app.setGlobalPrefix('api');
