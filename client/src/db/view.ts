@@ -21,18 +21,20 @@ export function composeRow(
     ? { version: base.server.version, fields: base.server.fields, deleted: base.server.deleted }
     : overlayPending(base.id, base.kind, base.server ?? undefined, changes);
   if (!view) return undefined;
+  return rowOf(base, { ...view, waiting: shown.filter((e) => e.status === 'pending').length });
+}
+
+/** A row from its identity, pulled copy and generation and what it shows; boatId copied out for its index. */
+function rowOf(
+  base: { id: string; kind: RecordKind; clubId: string; server: SyncRecord | null; gen?: number },
+  shown: Pick<RecordRow, 'version' | 'fields' | 'deleted' | 'waiting'>,
+): RecordRow {
   const row: RecordRow = {
-    id: base.id,
-    kind: base.kind,
-    clubId: base.clubId,
-    server: base.server,
-    version: view.version,
-    fields: view.fields,
-    deleted: view.deleted,
-    waiting: shown.filter((e) => e.status === 'pending').length,
+    id: base.id, kind: base.kind, clubId: base.clubId, server: base.server,
+    version: shown.version, fields: shown.fields, deleted: shown.deleted, waiting: shown.waiting,
   };
   if (base.gen !== undefined) row.gen = base.gen;
-  if (typeof view.fields.boatId === 'string') row.boatId = view.fields.boatId;
+  if (typeof shown.fields.boatId === 'string') row.boatId = shown.fields.boatId;
   return row;
 }
 
@@ -47,20 +49,13 @@ export function layerChange(
   row: RecordRow | undefined,
   entry: OutboxRow,
 ): RecordRow {
-  const next: RecordRow = {
-    id: base.id,
-    kind: base.kind,
-    clubId: base.clubId,
-    server: row?.server ?? null,
+  return rowOf({ ...base, server: row?.server ?? null, gen: row?.gen }, {
     version: row?.version ?? 0,
     // The mutation holds its own copy of the patch, so the row shares nothing with the caller.
     fields: { ...row?.fields, ...entry.mutation.patch },
     deleted: (row?.deleted ?? false) || entry.mutation.deleted === true,
     waiting: (row?.waiting ?? 0) + 1,
-  };
-  if (row?.gen !== undefined) next.gen = row.gen;
-  if (typeof next.fields.boatId === 'string') next.boatId = next.fields.boatId;
-  return next;
+  });
 }
 
 export function toLocalView(row: RecordRow): LocalView {

@@ -60,7 +60,11 @@ export async function applyPullPage(
     const existing = early ? [] : await db.records.bulkGet(ids);
     const entries = await db.outbox.where('recordId').anyOf(ids).toArray();
     const byRecord = new Map<string, OutboxRow[]>();
-    for (const e of entries) byRecord.set(e.recordId, [...(byRecord.get(e.recordId) ?? []), e]);
+    for (const e of entries) {
+      const mine = byRecord.get(e.recordId);
+      if (mine) mine.push(e);
+      else byRecord.set(e.recordId, [e]);
+    }
     const rows: RecordRow[] = [];
     const done: OutboxRow[] = [];
     changes.forEach((change, i) => {

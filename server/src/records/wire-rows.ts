@@ -1,4 +1,4 @@
-import { canSee, kindSpec, type RecordKind, type Role } from '@breakline/sync-protocol';
+import { canSee, kindRules, type RecordKind, type Role } from '@breakline/sync-protocol';
 import { ALL_KINDS, fieldColumns, snake, tableOf, type FieldColumn } from './columns.js';
 
 const q = (name: string) => `"${name}"`;
@@ -40,7 +40,7 @@ export function wireJson(kind: RecordKind): string {
     'fields', ${fieldsJson(fieldColumns(kind))})::text`;
 }
 
-const ownerField = (kind: RecordKind) => kindSpec(kind).access.ownerField as string | undefined;
+const ownerField = (kind: RecordKind) => kindRules(kind).access.ownerField as string | undefined;
 
 /** The column whose value decides, beside the role, who may see a record of the kind (canSee). */
 function ownerColumn(kind: RecordKind): string | undefined {
@@ -52,8 +52,8 @@ function ownerColumn(kind: RecordKind): string | undefined {
 export interface WireRow { kind: RecordKind; changeSeq: number; json: string; owner: string | null }
 
 /**
- * The part of the pull that reads a kind's records changed in (`$2`, `$3`] for club `$1`.
- * `i` is the kind's index in ALL_KINDS, returned so the rows can be told apart after the UNION.
+ * The part of the pull that reads a kind's records changed in (`$2`, `$3`] for club `$1`. Its
+ * `k` is the kind's index in ALL_KINDS, so the rows can be told apart after the UNION.
  */
 export function wireSelect(kind: RecordKind): string {
   const owner = ownerColumn(kind);

@@ -8,6 +8,9 @@ import type { Principal } from '../auth/principal.js';
 import { recordStore } from '../records/record-store.js';
 import { mayReceive, type WireRow } from '../records/wire-rows.js';
 
+/** A PullResponse as JSON text, with the two values the answer's headers repeat. */
+export interface PulledPage { json: string; checkpoint: string; hasMore: boolean }
+
 /**
  * Pull: the club's records changed after a checkpoint, oldest change first, that the caller may
  * see. Checkpoints carry the purge horizon they were given under, so a fresh start below the
@@ -17,9 +20,6 @@ import { mayReceive, type WireRow } from '../records/wire-rows.js';
  * a page of a thousand checks is over a megabyte, and parsing it only to write it out again
  * took most of a pull's time.
  */
-/** A PullResponse as JSON text, with the two values the answer's headers repeat. */
-export interface PulledPage { json: string; checkpoint: string; hasMore: boolean }
-
 @Injectable()
 export class PullService {
   constructor(private readonly db: DataSource) {}
