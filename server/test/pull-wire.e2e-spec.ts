@@ -64,6 +64,7 @@ describe('pulled records as JSON', () => {
   it('come a page at a time in change order, each record once, the page size kept', async () => {
     const [{ club_id: clubId }]: { club_id: string }[] = await t.db.query('SELECT club_id FROM sync_club_state ORDER BY last_seq DESC LIMIT 1');
     const all: number[] = [];
+    const left: number[] = [];
     let since = 0;
     for (;;) {
       const { rows, hasMore } = await recordStore.changedPage(t.db.manager, clubId, since, 7);
@@ -71,11 +72,14 @@ describe('pulled records as JSON', () => {
       if (hasMore) expect(rows).toHaveLength(7);
       all.push(...rows.map((r) => r.changeSeq));
       if (rows.length) since = rows[rows.length - 1]!.changeSeq;
+      left.push(await recordStore.countChangedAfter(t.db.manager, clubId, since));
       if (!hasMore) break;
     }
     const counted = await t.db.query(
       ALL_KINDS.map((k) => `SELECT change_seq FROM "${tableOf(k)}" WHERE club_id = $1`).join(' UNION ALL '), [clubId]) as { change_seq: string }[];
     expect(all).toEqual(counted.map((r) => Number(r.change_seq)).sort((a, b) => a - b));
+    // After each page, the count of what is left is what the later pages brought.
+    expect(left).toEqual(left.map((_, i) => all.length - Math.min(all.length, (i + 1) * 7)));
   });
 
   it('leave out a NULL field that is optional and not nullable, and keep a null that is allowed', async () => {

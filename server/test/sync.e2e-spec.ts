@@ -163,6 +163,7 @@ describe('sync push and pull', () => {
     const start = (await pullAll(crew.accessToken)).checkpoint;
     await push(crew.accessToken, phone.body(ids.map((id) => phone.mutation('defect', id, defectFields(boatId, crew.user.id))))).expect(200);
     const seen: string[] = [];
+    const remaining: number[] = [];
     let since = start;
     let pages = 0;
     for (;;) {
@@ -170,12 +171,15 @@ describe('sync push and pull', () => {
       // The headers repeat the body's checkpoint and hasMore, for a phone to ask ahead.
       expect([res.headers['breakline-checkpoint'], res.headers['breakline-has-more']]).toEqual([res.body.checkpoint, String(res.body.hasMore)]);
       seen.push(...res.body.changes.map((c: { id: string }) => c.id));
+      remaining.push(res.body.remaining);
       since = res.body.checkpoint;
       pages++;
       if (!res.body.hasMore) break;
     }
     expect(pages).toBe(3);
     expect(seen).toEqual(ids);
+    // What is left after each page, for the phone's "n of about m".
+    expect(remaining).toEqual([4, 1, 0]);
   });
 
   it('gives two concurrent pushes distinct sequence numbers and a pull sees both', async () => {

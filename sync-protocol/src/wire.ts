@@ -84,6 +84,11 @@ export interface PullResponse {
   /** Opaque to the phone ("<horizon>.<seq>", see wire-checkpoint.ts): send it back as `since` on the next pull. */
   checkpoint: string;
   hasMore: boolean;
+  /**
+   * How many changes the server holds after this page, counted before it leaves out those the
+   * caller may not see: at most this many more arrive. For "n of about m" during a long pull.
+   */
+  remaining?: number;
   /** The checkpoint is older than the tombstone purge horizon: drop the replica and pull from the start. */
   resetRequired?: boolean;
 }

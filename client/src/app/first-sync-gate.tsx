@@ -1,6 +1,6 @@
 import { useSyncExternalStore, type ReactNode } from 'react';
 import Alert from '@mui/material/Alert';
-import CircularProgress from '@mui/material/CircularProgress';
+import Box from '@mui/material/Box';
 import Paper from '@mui/material/Paper';
 import Typography from '@mui/material/Typography';
 import { useLiveQuery } from 'dexie-react-hooks';
@@ -22,18 +22,30 @@ export function FirstSyncGate({ children }: { children: ReactNode }) {
   if (state.lastSyncAt !== undefined) return children;
   // Only while records are arriving: an attempt that fails before any page (no signal) leaves
   // the screen as it is rather than swapping it out and back on every retry.
+  // The bar moves a page at a time and is still in between: an endless animation here would
+  // take a slow phone's processor from the very writes it waits on.
   if (activity.running && activity.progress?.phase === 'receiving') {
-    const received = activity.progress.done;
+    const { done, total } = activity.progress;
+    const count = total === undefined
+      ? `${done.toLocaleString('en')} records on this phone so far.`
+      : `${done.toLocaleString('en')} of about ${total.toLocaleString('en')} records on this phone.`;
     return (
       <Paper variant="outlined" sx={{ p: 3 }} role="status">
         <Typography variant="h6" component="h2" gutterBottom>
           Getting the club's records
         </Typography>
         <Typography color="text.secondary" sx={{ mb: 2 }}>
-          {received > 0 ? `${received.toLocaleString()} records on this phone so far. ` : ''}
+          {done > 0 || total !== undefined ? `${count} ` : ''}
           Boat states show once all of them are here, so no boat is shown without its defects and checks.
         </Typography>
-        <CircularProgress aria-label="Getting the club's records" />
+        {total !== undefined && total > 0 && (
+          <Box
+            role="progressbar" aria-label="Records received" aria-valuemin={0} aria-valuemax={total} aria-valuenow={Math.min(done, total)}
+            sx={{ height: 8, borderRadius: 4, bgcolor: 'action.selected', overflow: 'hidden' }}
+          >
+            <Box sx={{ height: '100%', width: `${Math.min(100, (done / total) * 100)}%`, bgcolor: 'primary.main' }} />
+          </Box>
+        )}
       </Paper>
     );
   }

@@ -96,7 +96,9 @@ export async function pullAll(ctx: PullContext): Promise<void> {
     since = page.checkpoint;
     await applyPullPage(db, scope.clubId, page, ctx.now(), { fromEmpty });
     received += page.changes.length;
-    ctx.onProgress?.({ phase: 'receiving', done: received, more: page.hasMore });
+    const left = page.remaining;
+    const total = page.hasMore && typeof left === 'number' && Number.isSafeInteger(left) && left >= 0 ? received + left : undefined;
+    ctx.onProgress?.(total === undefined ? { phase: 'receiving', done: received, more: page.hasMore } : { phase: 'receiving', done: received, more: true, total });
     if (!page.hasMore) return;
     current = ahead!.asked;
   }

@@ -23,6 +23,7 @@ describe('sync status words', () => {
     expect(waitingText(1)).toBe('1 change waiting to be sent');
     expect(progressText({ running: true, progress: { phase: 'sending', done: 500, total: 1200 } })).toBe('Sending changes: 500 of 1,200');
     expect(progressText({ running: true, progress: { phase: 'receiving', done: 2000, more: true } })).toBe('Receiving changes: 2,000 so far');
+    expect(progressText({ running: true, progress: { phase: 'receiving', done: 2000, more: true, total: 20000 } })).toBe('Receiving changes: 2,000 of about 20,000');
     expect(progressText({ running: false, progress: null })).toBeNull();
     expect(lastSyncText(null, NOW)).toBe('Not synced yet on this phone');
   });

@@ -25,22 +25,32 @@ export interface RefusedPhoto {
   problem: string;
 }
 
-export async function readSyncStatus(db: ReplicaDb, clubId: string): Promise<StoredSyncStatus> {
-  const state = await loadClubState(db, clubId);
-  return {
-    waiting: await db.outbox.where('[clubId+status]').equals([clubId, 'pending']).count(),
-    lastSyncAt: state.lastSyncAt ?? null,
-    lastError: state.lastError ?? null,
-    openConflicts: state.openConflicts ?? 0,
-    rejected: await db.rejected.where('clubId').equals(clubId).sortBy('at'),
-    raisedConflicts: await db.conflictsSeen.where('clubId').equals(clubId).sortBy('at'),
-    photosWaiting: await countPhotosIn(db, clubId, 'due'),
-    // Refused photos are rare, so reading their rows (bytes and all) for the reason costs little.
-    refusedPhotos: (await db.photos.where('[clubId+state]').equals([clubId, 'refused']).toArray()).map((p) => ({
-      sha256: p.sha256,
-      problem: p.problem ?? 'The server did not take this photo.',
-    })),
-  };
+/**
+ * One read-only transaction, its reads sent together: the status is read again after every page
+ * of a pull, and six transactions one after another each waited their turn behind the page's writes.
+ */
+export function readSyncStatus(db: ReplicaDb, clubId: string): Promise<StoredSyncStatus> {
+  return db.transaction('r', [db.syncState, db.outbox, db.rejected, db.conflictsSeen, db.photos], async () => {
+    const [state, waiting, rejected, raisedConflicts, photosWaiting, refused] = await Promise.all([
+      loadClubState(db, clubId),
+      db.outbox.where('[clubId+status]').equals([clubId, 'pending']).count(),
+      db.rejected.where('clubId').equals(clubId).sortBy('at'),
+      db.conflictsSeen.where('clubId').equals(clubId).sortBy('at'),
+      countPhotosIn(db, clubId, 'due'),
+      // Refused photos are rare, so reading their rows (bytes and all) for the reason costs little.
+      db.photos.where('[clubId+state]').equals([clubId, 'refused']).toArray(),
+    ]);
+    return {
+      waiting,
+      lastSyncAt: state.lastSyncAt ?? null,
+      lastError: state.lastError ?? null,
+      openConflicts: state.openConflicts ?? 0,
+      rejected,
+      raisedConflicts,
+      photosWaiting,
+      refusedPhotos: refused.map((p) => ({ sha256: p.sha256, problem: p.problem ?? 'The server did not take this photo.' })),
+    };
+  });
 }
 
 export type SyncStatus = StoredSyncStatus & SyncActivity;

@@ -76,6 +76,13 @@ export const recordStore = {
     };
   },
 
+  /** How many of the club's records changed after `since`, of every kind, from the (club_id, change_seq) indexes alone. */
+  async countChangedAfter(em: EntityManager, clubId: string, since: number): Promise<number> {
+    const counts = ALL_KINDS.map((kind) => `(SELECT count(*) FROM ${q(tableOf(kind))} WHERE club_id = $1 AND change_seq > $2)`);
+    const [row]: { n: string }[] = await em.query(`SELECT (${counts.join(' + ')})::bigint AS n`, [clubId, since]);
+    return Number(row!.n);
+  },
+
   /** Drops tombstones older than `before`; returns how many and the highest change seq removed. */
   async purgeTombstones(em: EntityManager, clubId: string, before: Date): Promise<{ highest: number; count: number }> {
     let highest = 0;

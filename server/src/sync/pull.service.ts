@@ -42,15 +42,16 @@ export class PullService {
         return { json: JSON.stringify(reset), checkpoint: reset.checkpoint, hasMore: false };
       }
       const { rows, hasMore } = await recordStore.changedPage(em, p.clubId, since.seq, limit);
-      return this.page(p, rows, hasMore, horizon, since.seq);
+      const seq = rows.length ? rows[rows.length - 1]!.changeSeq : since.seq;
+      const remaining = hasMore ? await recordStore.countChangedAfter(em, p.clubId, seq) : 0;
+      return this.page(p, rows, { hasMore, remaining }, formatCheckpoint({ horizon, seq }));
     });
   }
 
-  private page(p: Principal, rows: WireRow[], hasMore: boolean, horizon: number, sinceSeq: number): PulledPage {
-    // Records the caller may not see still move the checkpoint on, so they are never asked for again.
+  /** Records the caller may not see still move the checkpoint on, so they are never asked for again. */
+  private page(p: Principal, rows: WireRow[], { hasMore, remaining }: { hasMore: boolean; remaining: number }, checkpoint: string): PulledPage {
     const shown = rows.filter((r) => mayReceive(r, p.role, p.userId)).map((r) => r.json);
-    const seq = rows.length ? rows[rows.length - 1]!.changeSeq : sinceSeq;
-    const checkpoint = formatCheckpoint({ horizon, seq });
-    return { json: `{"changes":[${shown.join(',')}],"checkpoint":${JSON.stringify(checkpoint)},"hasMore":${hasMore}}`, checkpoint, hasMore };
+    const json = `{"changes":[${shown.join(',')}],"checkpoint":${JSON.stringify(checkpoint)},"hasMore":${hasMore},"remaining":${remaining}}`;
+    return { json, checkpoint, hasMore };
   }
 }

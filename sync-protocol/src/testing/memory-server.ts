@@ -81,7 +81,7 @@ export class MemorySyncServer {
       checkpoint = r.changeSeq;
       if (canSee(r.kind, auth.role, r.fields, auth.userId)) changes.push(toWire(r));
     }
-    return { changes, checkpoint: formatCheckpoint({ horizon, seq: checkpoint }), hasMore: i < after.length };
+    return { changes, checkpoint: formatCheckpoint({ horizon, seq: checkpoint }), hasMore: i < after.length, remaining: after.length - i };
   }
 
   settle(auth: AuthContext, body: SettleRequest, pt: number): ConflictRecord {
