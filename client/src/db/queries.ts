@@ -26,10 +26,11 @@ export function toLocalRecord<K extends RecordKind>(row: RecordRow): LocalRecord
 export async function listRecords<K extends RecordKind>(
   db: ReplicaDb, clubId: string, kind: K, filter: RecordFilter = {},
 ): Promise<LocalRecord<K>[]> {
+  const byBoat = db.records.where('[clubId+kind+boatId]');
   const rows =
     filter.boatId !== undefined
-      ? await db.records.where('[clubId+kind+boatId]').equals([clubId, kind, filter.boatId]).toArray()
-      : await db.records.where('[clubId+kind]').equals([clubId, kind]).toArray();
+      ? await byBoat.equals([clubId, kind, filter.boatId]).toArray()
+      : await byBoat.between([clubId, kind, Dexie.minKey], [clubId, kind, Dexie.maxKey], true, true).toArray();
   return rows
     .filter((r) => filter.includeDeleted || !r.deleted)
     .sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0))
@@ -43,7 +44,7 @@ export async function getRecord<K extends RecordKind>(db: ReplicaDb, clubId: str
   return toLocalRecord<K>(row);
 }
 
-/** Every row of a club, for the sweep after a reset. */
+/** Every row of a club, for the sweep after a reset: the keys from [clubId] up sort before any [clubId, kind, boat]. */
 export function clubRows(db: ReplicaDb, clubId: string) {
-  return db.records.where('[clubId+kind]').between([clubId, Dexie.minKey], [clubId, Dexie.maxKey]);
+  return db.records.where('[clubId+kind+boatId]').between([clubId], [clubId, Dexie.maxKey], true, true);
 }

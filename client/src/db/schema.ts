@@ -1,5 +1,5 @@
 import Dexie, { type EntityTable, type Table, type Transaction } from 'dexie';
-import type { ConflictSeenRow, OutboxRow, PhotoRow, RecordRow, RejectedRow, SyncStateRow } from './types';
+import { NO_BOAT, type ConflictSeenRow, type OutboxRow, type PhotoRow, type RecordRow, type RejectedRow, type SyncStateRow } from './types';
 
 /**
  * Every version of the phone's store, oldest first. A version, once shipped, never changes:
@@ -55,6 +55,22 @@ export const SCHEMA_VERSIONS = [
         await photos.put({ ...rest, state: uploaded === 1 ? 'sent' : 'due' });
       }
     },
+  },
+  {
+    version: 4,
+    stores: {
+      // One index serves both: a kind's records are the range of every boat under [clubId+kind].
+      // Each index costs IndexedDB an entry a row, and a first sync writes every row of the club.
+      records: 'id, [clubId+kind+boatId]',
+    },
+    // Rows with no boat were left out of the boat index; the empty boat puts them in it.
+    upgrade: (tx: Transaction) =>
+      tx
+        .table<RecordRow>('records')
+        .toCollection()
+        .modify((row) => {
+          if (typeof row.boatId !== 'string') row.boatId = NO_BOAT;
+        }),
   },
 ] as const;
 

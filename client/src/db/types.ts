@@ -1,5 +1,8 @@
 import type { Fields, Hlc, KindFields, Mutation, MutationError, RecordKind, SyncRecord } from '@breakline/sync-protocol';
 
+/** The boatId a row is indexed under when its record has no boat. */
+export const NO_BOAT = '';
+
 /**
  * One record as this phone holds it: the copy last pulled from the server (`server`) and, beside
  * it, what the screens show (`fields`, `deleted`): that copy with the queued edits on top. The
@@ -17,8 +20,11 @@ export interface RecordRow {
   deleted: boolean;
   /** Edits made here that the server has not accepted yet. */
   waiting: number;
-  /** The shown boatId, copied out for the [clubId+kind+boatId] index (version 2). */
-  boatId?: string;
+  /**
+   * The shown boatId, copied out for the [clubId+kind+boatId] index (version 2); NO_BOAT for a
+   * record with none (version 4), so every row is in the index and it also lists a whole kind.
+   */
+  boatId: string;
   /** The pull generation that last wrote `server`; a reset sweeps rows of older generations. */
   gen?: number;
 }

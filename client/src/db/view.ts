@@ -1,6 +1,6 @@
 import { overlayPending, type LocalView, type RecordKind, type SyncRecord } from '@breakline/sync-protocol';
 import type { ReplicaDb } from './schema';
-import type { OutboxRow, RecordRow } from './types';
+import { NO_BOAT, type OutboxRow, type RecordRow } from './types';
 
 /** An accepted change stays on top only until the pulled copy reaches the version it made. */
 export function stillShown(entry: OutboxRow, server: SyncRecord | null): boolean {
@@ -24,7 +24,7 @@ export function composeRow(
   return rowOf(base, { ...view, waiting: shown.filter((e) => e.status === 'pending').length });
 }
 
-/** A row from its identity, pulled copy and generation and what it shows; boatId copied out for its index. */
+/** A row from its identity, pulled copy and generation and what it shows; boatId copied out for its index (NO_BOAT without one). */
 function rowOf(
   base: { id: string; kind: RecordKind; clubId: string; server: SyncRecord | null; gen?: number },
   shown: Pick<RecordRow, 'version' | 'fields' | 'deleted' | 'waiting'>,
@@ -32,9 +32,9 @@ function rowOf(
   const row: RecordRow = {
     id: base.id, kind: base.kind, clubId: base.clubId, server: base.server,
     version: shown.version, fields: shown.fields, deleted: shown.deleted, waiting: shown.waiting,
+    boatId: typeof shown.fields.boatId === 'string' ? shown.fields.boatId : NO_BOAT,
   };
   if (base.gen !== undefined) row.gen = base.gen;
-  if (typeof shown.fields.boatId === 'string') row.boatId = shown.fields.boatId;
   return row;
 }
 
