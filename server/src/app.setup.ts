@@ -1,5 +1,6 @@
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
+import { constants as zlibConstants } from 'node:zlib';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
 import type { NextFunction, Request, Response } from 'express';
@@ -27,7 +28,14 @@ export function configureApp(app: NestExpressApplication, env: Env) {
   // Answers go compressed to a browser that asks: a first sync's pull pages are megabytes of
   // JSON that shrink to about a tenth, which is most of the wait on a clubhouse Wi-Fi. A push's
   // answer is a short list of results, not worth the server's time while it takes the next batch.
-  app.use(compression({ filter: (req, res) => !req.path.startsWith('/api/sync/push') && compression.filter(req, res) }));
+  // The fast settings: on a page of checks, brotli at quality 1 packs tighter than gzip's default
+  // in a quarter of the time, and gzip at level 3 (for clients without brotli) costs half as much
+  // as its default for about a fifth more bytes.
+  app.use(compression({
+    level: 3,
+    brotli: { params: { [zlibConstants.BROTLI_PARAM_QUALITY]: 1 } },
+    filter: (req, res) => !req.path.startsWith('/api/sync/push') && compression.filter(req, res),
+  }));
   // Push bodies may arrive gzip-encoded; the limit applies to the inflated JSON.
   app.useBodyParser('json', { limit: `${env.REQUEST_BODY_LIMIT_MB}mb`, inflate: true });
   app.setGlobalPrefix('api');
