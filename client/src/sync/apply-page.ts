@@ -40,25 +40,30 @@ async function finishPull(db: ReplicaDb, clubId: string, sweepBelow: number | un
  * with no record of the club on this phone and no checkpoint (at generation `gen`): every server
  * copy held was then written by an earlier page of this same pull, from an older change, so there
  * is nothing to compare with and the held rows are not read (on a first sync that read was a
- * fifth of the time). The page's rows are then put before anything is read: IndexedDB copies a
- * value when it is put, and a transaction's requests wait for the one before it, so the copying
- * of this page overlaps the commit of the last. Rows with queued edits are put again, composed,
- * in the same transaction; no screen sees the first put.
+ * fifth of the time). The page's rows are then put at once, right after the few small reads the
+ * page needs: a transaction's requests run in order, so the reads answer while the rows are still
+ * being written, and the checkpoint's writes queue behind them; nothing waits on the big put but
+ * the commit. Rows with queued edits are put again, composed, in the same transaction; no screen
+ * sees the first put.
  */
 export async function applyPullPage(
   db: ReplicaDb, clubId: string, page: PullResponse, now: number, { fromEmpty }: { fromEmpty?: { gen: number } } = {},
 ): Promise<void> {
   await db.transaction('rw', db.records, db.outbox, db.syncState, async () => {
     const changes = page.changes.filter((c) => c.clubId === clubId);
+    const ids = changes.map((c) => c.id);
+    const reads = Promise.all([
+      loadClubState(db, clubId),
+      loadReplica(db, now),
+      db.outbox.where('recordId').anyOf(ids).toArray(),
+      fromEmpty ? [] : db.records.bulkGet(ids),
+    ]);
     const early = fromEmpty
       ? db.records.bulkPut(changes.map((change) => composeRow({ id: change.id, kind: change.kind, clubId, server: change, gen: fromEmpty.gen }, [])!))
       : undefined;
     // Were the put to fail, the transaction fails with it and the awaits below say so first.
     early?.catch(() => undefined);
-    const state = await loadClubState(db, clubId);
-    const ids = changes.map((c) => c.id);
-    const existing = early ? [] : await db.records.bulkGet(ids);
-    const entries = await db.outbox.where('recordId').anyOf(ids).toArray();
+    const [state, replica, entries, existing] = await reads;
     const byRecord = new Map<string, OutboxRow[]>();
     for (const e of entries) {
       const mine = byRecord.get(e.recordId);
@@ -76,11 +81,18 @@ export async function applyPullPage(
       const row = composeRow({ id: change.id, kind: change.kind, clubId, server, gen: state.gen }, mine);
       if (row) rows.push(row);
     });
-    await early;
-    await db.records.bulkPut(rows);
-    await db.outbox.bulkDelete(done.map((e) => e.seq));
-    await db.syncState.put(receiveClocks(await loadReplica(db, now), changes, now));
-    if (!page.hasMore) await finishPull(db, clubId, state.sweepBelow);
-    await updateClubState(db, clubId, { checkpoint: page.checkpoint, sweepBelow: page.hasMore ? state.sweepBelow : undefined });
+    const writes: Promise<unknown>[] = [];
+    if (early) writes.push(early);
+    if (rows.length) writes.push(db.records.bulkPut(rows));
+    if (done.length) writes.push(db.outbox.bulkDelete(done.map((e) => e.seq)));
+    writes.push(db.syncState.put(receiveClocks(replica, changes, now)));
+    if (page.hasMore) {
+      writes.push(db.syncState.put({ ...state, checkpoint: page.checkpoint }));
+      await Promise.all(writes);
+      return;
+    }
+    await Promise.all(writes);
+    await finishPull(db, clubId, state.sweepBelow);
+    await updateClubState(db, clubId, { checkpoint: page.checkpoint, sweepBelow: undefined });
   });
 }
