@@ -171,7 +171,7 @@ describe('sync push and pull', () => {
     let since = start;
     let pages = 0;
     for (;;) {
-      const res = await pull(crew.accessToken, `?since=${since}&limit=3`).expect(200);
+      const res = await pull(crew.accessToken, `?since=${since}&limit=3${pages === 0 ? '&count=1' : ''}`).expect(200);
       // The headers repeat the body's checkpoint and hasMore, for a phone to ask ahead.
       expect([res.headers['breakline-checkpoint'], res.headers['breakline-has-more']]).toEqual([res.body.checkpoint, String(res.body.hasMore)]);
       seen.push(...res.body.changes.map((c: { id: string }) => c.id));
@@ -182,8 +182,10 @@ describe('sync push and pull', () => {
     }
     expect(pages).toBe(3);
     expect(seen).toEqual(ids);
-    // What is left after each page, for the phone's "n of about m".
-    expect(remaining).toEqual([4, 1, 0]);
+    // What is left after the first page, for the phone's "n of about m"; counted only when asked.
+    expect(remaining).toEqual([4, undefined, undefined]);
+    const wrong = await pull(crew.accessToken, '?count=yes').expect(400);
+    expect(JSON.stringify(wrong.body)).toMatch(/must be 1 to count the changes left/);
   });
 
   it('gives two concurrent pushes distinct sequence numbers and a pull sees both', async () => {

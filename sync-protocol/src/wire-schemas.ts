@@ -101,10 +101,15 @@ export function parsePushRequest(body: unknown): PushParse {
   return r.success ? { success: true, data: r.data as PushRequest } : { success: false, error: r.error };
 }
 
-/** Query of GET /api/sync/pull; `since` absent means from the start. */
+/**
+ * Query of GET /api/sync/pull; `since` absent means from the start. `count=1` asks for
+ * `remaining` in the answer: a phone asks on the first page of a pull only, since counting what
+ * is left on every page of a large club would cost the server the square of its size.
+ */
 export const PullQuerySchema = z.strictObject({
   since: z.string().regex(CHECKPOINT_PATTERN, { error: 'must be a checkpoint from an earlier pull' }).optional(),
   limit: z.coerce.number().int().min(1).max(MAX_PULL_LIMIT).default(DEFAULT_PULL_LIMIT),
+  count: z.enum(['0', '1'], { error: 'must be 1 to count the changes left, or 0' }).optional(),
 });
 
 export const SettleRequestSchema = z

@@ -85,8 +85,9 @@ export interface PullResponse {
   checkpoint: string;
   hasMore: boolean;
   /**
-   * How many changes the server holds after this page, counted before it leaves out those the
-   * caller may not see: at most this many more arrive. For "n of about m" during a long pull.
+   * Only when the pull asked with `count=1`: how many changes the server holds after this page,
+   * counted before it leaves out those the caller may not see, so at most this many more arrive.
+   * For "n of about m" during a long pull.
    */
   remaining?: number;
   /** The checkpoint is older than the tombstone purge horizon: drop the replica and pull from the start. */

@@ -54,9 +54,10 @@ interface Asked {
 export async function pullAll(ctx: PullContext): Promise<void> {
   const { db, scope } = ctx;
   const limit = ctx.pageSize ?? PULL_PAGE;
-  const ask = (since: string | undefined): Asked => {
+  const ask = (since: string | undefined, count = false): Asked => {
     const query = new URLSearchParams({ limit: String(limit) });
     if (since !== undefined) query.set('since', since);
+    if (count) query.set('count', '1');
     const response = syncResponse(ctx, `/api/sync/pull?${query}`);
     const head = response.then((r) => {
       const checkpoint = r.ok ? r.headers.get(PULL_CHECKPOINT_HEADER) : null;
@@ -78,7 +79,10 @@ export async function pullAll(ctx: PullContext): Promise<void> {
   let fromEmpty = since === undefined && (await clubRows(db, scope.clubId).count()) === 0 ? { gen: start.gen } : undefined;
   let received = 0;
   let resets = 0;
-  let current = ask(since);
+  /** What this pull brings at most, from the count the first page asked for. */
+  let total: number | undefined;
+  let first = true;
+  let current = ask(since, true);
   for (;;) {
     const head = await current.head;
     let ahead = head?.hasMore ? { since: head.checkpoint, asked: ask(head.checkpoint) } : undefined;
@@ -89,16 +93,20 @@ export async function pullAll(ctx: PullContext): Promise<void> {
       await startReset(db, scope.clubId);
       since = undefined;
       fromEmpty = undefined;
-      current = ask(since);
+      first = true;
+      current = ask(since, true);
       continue;
     }
     if (page.hasMore && ahead?.since !== page.checkpoint) ahead = { since: page.checkpoint, asked: ask(page.checkpoint) };
     since = page.checkpoint;
     await applyPullPage(db, scope.clubId, page, ctx.now(), { fromEmpty });
     received += page.changes.length;
-    const left = page.remaining;
-    const total = page.hasMore && typeof left === 'number' && Number.isSafeInteger(left) && left >= 0 ? received + left : undefined;
-    ctx.onProgress?.(total === undefined ? { phase: 'receiving', done: received, more: page.hasMore } : { phase: 'receiving', done: received, more: true, total });
+    if (first) {
+      const left = page.remaining;
+      total = typeof left === 'number' && Number.isSafeInteger(left) && left >= 0 ? received + left : undefined;
+      first = false;
+    }
+    ctx.onProgress?.(total === undefined || !page.hasMore ? { phase: 'receiving', done: received, more: page.hasMore } : { phase: 'receiving', done: received, more: true, total: Math.max(total, received) });
     if (!page.hasMore) return;
     current = ahead!.asked;
   }

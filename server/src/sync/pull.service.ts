@@ -43,15 +43,18 @@ export class PullService {
       }
       const { rows, hasMore } = await recordStore.changedPage(em, p.clubId, since.seq, limit);
       const seq = rows.length ? rows[rows.length - 1]!.changeSeq : since.seq;
-      const remaining = hasMore ? await recordStore.countChangedAfter(em, p.clubId, seq) : 0;
+      // Counted only when asked (the first page of a phone's pull): on every page of a large
+      // club it would read the rest of the club's change index each time.
+      const remaining = q.data.count !== '1' ? undefined : hasMore ? await recordStore.countChangedAfter(em, p.clubId, seq) : 0;
       return this.page(p, rows, { hasMore, remaining }, formatCheckpoint({ horizon, seq }));
     });
   }
 
   /** Records the caller may not see still move the checkpoint on, so they are never asked for again. */
-  private page(p: Principal, rows: WireRow[], { hasMore, remaining }: { hasMore: boolean; remaining: number }, checkpoint: string): PulledPage {
+  private page(p: Principal, rows: WireRow[], { hasMore, remaining }: { hasMore: boolean; remaining?: number }, checkpoint: string): PulledPage {
     const shown = rows.filter((r) => mayReceive(r, p.role, p.userId)).map((r) => r.json);
-    const json = `{"changes":[${shown.join(',')}],"checkpoint":${JSON.stringify(checkpoint)},"hasMore":${hasMore},"remaining":${remaining}}`;
+    const counted = remaining === undefined ? '' : `,"remaining":${remaining}`;
+    const json = `{"changes":[${shown.join(',')}],"checkpoint":${JSON.stringify(checkpoint)},"hasMore":${hasMore}${counted}}`;
     return { json, checkpoint, hasMore };
   }
 }

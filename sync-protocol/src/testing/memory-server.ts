@@ -64,7 +64,7 @@ export class MemorySyncServer {
   }
 
   /** Changes after `since` the caller may see, oldest first; the checkpoint passes hidden ones too. */
-  pull(auth: AuthContext, query: { since?: string; limit?: number | string } = {}): PullResponse {
+  pull(auth: AuthContext, query: { since?: string; limit?: number | string; count?: string } = {}): PullResponse {
     const q = PullQuerySchema.safeParse(query);
     if (!q.success) throw new SyncRequestError(400, `Malformed pull: ${q.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
     const club = this.club(auth.clubId);
@@ -81,7 +81,9 @@ export class MemorySyncServer {
       checkpoint = r.changeSeq;
       if (canSee(r.kind, auth.role, r.fields, auth.userId)) changes.push(toWire(r));
     }
-    return { changes, checkpoint: formatCheckpoint({ horizon, seq: checkpoint }), hasMore: i < after.length, remaining: after.length - i };
+    const page: PullResponse = { changes, checkpoint: formatCheckpoint({ horizon, seq: checkpoint }), hasMore: i < after.length };
+    if (q.data.count === '1') page.remaining = after.length - i;
+    return page;
   }
 
   settle(auth: AuthContext, body: SettleRequest, pt: number): ConflictRecord {

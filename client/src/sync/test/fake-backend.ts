@@ -10,6 +10,8 @@ export interface SeenRequest {
   mutations?: number;
   /** A pull's `since`. */
   since?: string;
+  /** A pull that asked for the count of changes left. */
+  count?: true;
 }
 
 const CODES: Record<number, string> = { 400: 'validation_failed', 403: 'forbidden', 404: 'not_found', 409: 'conflict', 426: 'protocol_outdated' };
@@ -65,6 +67,7 @@ export class FakeBackend {
     const gzip = new Headers(init.headers).get('Content-Encoding') === 'gzip';
     const seen: SeenRequest = { method, path: url.pathname, gzip };
     if (url.searchParams.has('since')) seen.since = url.searchParams.get('since')!;
+    if (url.searchParams.get('count') === '1') seen.count = true;
     this.requests.push(seen);
     if (this.offline) throw new TypeError('Failed to fetch');
     const route = this.routes[`${method} ${url.pathname}`];
