@@ -106,7 +106,9 @@ export async function pullAll(ctx: PullContext): Promise<void> {
       total = typeof left === 'number' && Number.isSafeInteger(left) && left >= 0 ? received + left : undefined;
       first = false;
     }
-    ctx.onProgress?.(total === undefined || !page.hasMore ? { phase: 'receiving', done: received, more: page.hasMore } : { phase: 'receiving', done: received, more: true, total: Math.max(total, received) });
+    // Records changed during the pull may come on top of the count; the total never trails them.
+    const counted = total !== undefined && page.hasMore ? { total: Math.max(total, received) } : {};
+    ctx.onProgress?.({ phase: 'receiving', done: received, more: page.hasMore, ...counted });
     if (!page.hasMore) return;
     current = ahead!.asked;
   }
