@@ -1,6 +1,6 @@
 import { decodeHlc, HybridClock, type PullResponse, type SyncRecord } from '@breakline/sync-protocol';
 import { clubRows } from '@/db/queries';
-import { loadClubState, loadReplica, updateClubState } from '@/db/replica-state';
+import { loadClubState, loadReplica } from '@/db/replica-state';
 import type { ReplicaDb } from '@/db/schema';
 import type { OutboxRow, RecordRow, ReplicaRow } from '@/db/types';
 import { composeRow, recomposeRows, stillShown } from '@/db/view';
@@ -86,13 +86,8 @@ export async function applyPullPage(
     if (rows.length) writes.push(db.records.bulkPut(rows));
     if (done.length) writes.push(db.outbox.bulkDelete(done.map((e) => e.seq)));
     writes.push(db.syncState.put(receiveClocks(replica, changes, now)));
-    if (page.hasMore) {
-      writes.push(db.syncState.put({ ...state, checkpoint: page.checkpoint }));
-      await Promise.all(writes);
-      return;
-    }
+    writes.push(db.syncState.put({ ...state, checkpoint: page.checkpoint, sweepBelow: page.hasMore ? state.sweepBelow : undefined }));
     await Promise.all(writes);
-    await finishPull(db, clubId, state.sweepBelow);
-    await updateClubState(db, clubId, { checkpoint: page.checkpoint, sweepBelow: undefined });
+    if (!page.hasMore) await finishPull(db, clubId, state.sweepBelow);
   });
 }

@@ -39,6 +39,8 @@ async function startReset(db: ReplicaDb, clubId: string): Promise<void> {
 }
 
 interface Asked {
+  /** Whether this request asked for the count of changes left (the first page of a pull). */
+  counted: boolean;
   /** The checkpoint and hasMore the answer's headers give, once they arrive; null without them. */
   head: Promise<{ checkpoint: string; hasMore: boolean } | null>;
   page: Promise<PullResponse>;
@@ -71,7 +73,7 @@ export async function pullAll(ctx: PullContext): Promise<void> {
     });
     // Should an early request be dropped, its failure is not anyone's to hear.
     page.catch(() => undefined);
-    return { head, page };
+    return { counted: count, head, page };
   };
   const start = await loadClubState(db, scope.clubId);
   let since = start.checkpoint;
@@ -81,7 +83,6 @@ export async function pullAll(ctx: PullContext): Promise<void> {
   let resets = 0;
   /** What this pull brings at most, from the count the first page asked for. */
   let total: number | undefined;
-  let first = true;
   let current = ask(since, true);
   for (;;) {
     const head = await current.head;
@@ -93,7 +94,6 @@ export async function pullAll(ctx: PullContext): Promise<void> {
       await startReset(db, scope.clubId);
       since = undefined;
       fromEmpty = undefined;
-      first = true;
       current = ask(since, true);
       continue;
     }
@@ -101,10 +101,9 @@ export async function pullAll(ctx: PullContext): Promise<void> {
     since = page.checkpoint;
     await applyPullPage(db, scope.clubId, page, ctx.now(), { fromEmpty });
     received += page.changes.length;
-    if (first) {
+    if (current.counted) {
       const left = page.remaining;
       total = typeof left === 'number' && Number.isSafeInteger(left) && left >= 0 ? received + left : undefined;
-      first = false;
     }
     // Records changed during the pull may come on top of the count; the total never trails them.
     const counted = total !== undefined && page.hasMore ? { total: Math.max(total, received) } : {};

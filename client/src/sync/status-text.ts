@@ -46,7 +46,7 @@ export function progressText(s: Pick<SyncStatus, 'running' | 'progress'>): strin
   if (!p) return 'Syncing…';
   if (p.phase === 'sending') return `Sending changes: ${p.done.toLocaleString('en')} of ${p.total.toLocaleString('en')}`;
   if (p.phase === 'photos') return `Sending photos: ${p.done.toLocaleString('en')} of ${p.total.toLocaleString('en')}`;
-  if (p.more && p.total !== undefined) return `Receiving changes: ${p.done.toLocaleString('en')} of about ${p.total.toLocaleString('en')}`;
+  if (p.total !== undefined) return `Receiving changes: ${p.done.toLocaleString('en')} of about ${p.total.toLocaleString('en')}`;
   return `Receiving changes: ${p.done.toLocaleString('en')}${p.more ? ' so far' : ''}`;
 }
 
