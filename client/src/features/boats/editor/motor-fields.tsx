@@ -4,6 +4,8 @@ import TextField from '@mui/material/TextField';
 import type { LocalRecord } from '@/db/types';
 import type { DraftErrors } from './boat-draft';
 import type { MotorDraft } from './motor-draft';
+import type { LoggedService } from '../service/motor-service';
+import { dayWords } from '../service/service-words';
 
 type Key = Exclude<keyof MotorDraft, 'fuelMode' | 'storedService'>;
 
@@ -11,10 +13,30 @@ interface Props {
   draft: MotorDraft;
   errors: DraftErrors;
   boats: readonly LocalRecord<'boat'>[];
+  logged?: LoggedService;
   set: (change: Partial<MotorDraft>) => void;
 }
 
-export function MotorFields({ draft, errors, boats, set }: Props) {
+/**
+ * Notes where the motor's own boxes are not what its service is counted from: a later service in
+ * the history, or trips and services that logged the hour meter higher than the record says.
+ */
+function notesOf(draft: MotorDraft, logged: LoggedService | undefined): Partial<Record<Key, string>> {
+  const notes: Partial<Record<Key, string>> = {};
+  if (!logged) return notes;
+  const typed = Number(draft.hourMeter.trim().replace(',', '.'));
+  if (Number.isFinite(typed) && logged.hourMeter > typed) {
+    notes.hourMeter = `Trips and services have logged up to ${logged.hourMeter.toFixed(1)} h; the due counts from that.`;
+  }
+  const last = logged.last;
+  if (last?.recordId) {
+    notes.lastServiceHours = `The service history below has a later one: ${dayWords(last.date)} at ${last.hours.toFixed(1)} h. The due counts from that; these two boxes keep a service from before the history.`;
+  }
+  return notes;
+}
+
+export function MotorFields({ draft, errors, boats, logged, set }: Props) {
+  const notes = notesOf(draft, logged);
   const box = (field: Key, label: string, inputMode?: 'decimal' | 'numeric', type?: string) => (
     <TextField
       label={label}
@@ -22,7 +44,7 @@ export function MotorFields({ draft, errors, boats, set }: Props) {
       value={draft[field]}
       onChange={(e) => set({ [field]: e.target.value })}
       error={Boolean(errors[field])}
-      helperText={errors[field]}
+      helperText={errors[field] ?? notes[field]}
       slotProps={{ htmlInput: { inputMode }, inputLabel: type === 'date' ? { shrink: true } : undefined }}
     />
   );

@@ -10,17 +10,20 @@ import type { DraftErrors } from './boat-draft';
 import { buildMotor, type MotorDraft } from './motor-draft';
 import { MotorFields } from './motor-fields';
 import { useLocalSave } from '@/lib/use-local-save';
+import type { LoggedService } from '../service/motor-service';
 
 interface Props {
   motorId: string | null;
   /** The boat the motor is on now, to log a move when that changes. */
   fittedTo: string | null;
   initial: MotorDraft;
+  /** What the service history and trips say beside the record; none for a new motor. */
+  logged?: LoggedService;
   editable: boolean;
   onSaved: () => void;
 }
 
-export function MotorForm({ motorId, fittedTo, initial, editable, onSaved }: Props) {
+export function MotorForm({ motorId, fittedTo, initial, logged, editable, onSaved }: Props) {
   const ctx = useReplica();
   const { activeClub } = useSession();
   const boats = useRecords('boat') ?? [];
@@ -41,7 +44,7 @@ export function MotorForm({ motorId, fittedTo, initial, editable, onSaved }: Pro
   }
   return (
     <Box component="fieldset" disabled={!editable} sx={{ border: 0, p: 0, m: 0, display: 'grid', gap: 2 }}>
-      <MotorFields draft={draft} errors={errors} boats={boats} set={(c) => setDraft((d) => ({ ...d, ...c }))} />
+      <MotorFields draft={draft} errors={errors} boats={boats} logged={logged} set={(c) => setDraft((d) => ({ ...d, ...c }))} />
       {moving && (
         <TextField
           label="Why is it moving? (kept in the motor's history)"

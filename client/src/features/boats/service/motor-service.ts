@@ -56,6 +56,17 @@ export function lastService(motor: LocalRecord<'motor'>, records: readonly Local
   return fromMotor ? { date: utcToLocal(fromMotor.at, zone).date, hours: fromMotor.hours, recordId: null } : null;
 }
 
+/** What the motor's service records and trips say beside its own record, for its editor. */
+export interface LoggedService {
+  /** The latest service; from a service record when `recordId` is set. */
+  last: LastService | null;
+  hourMeter: number;
+}
+
+export function loggedService(motor: LocalRecord<'motor'>, sources: ServiceSources, zone: string): LoggedService {
+  return { last: lastService(motor, sources.serviceRecords, zone), hourMeter: hourMeterNow(motor, sources) };
+}
+
 /** The hour meter now: the record's reading may lag a trip's closing reading or a service's. */
 export function hourMeterNow(motor: LocalRecord<'motor'>, sources: ServiceSources): number {
   let hours = motor.fields.hourMeter;

@@ -101,6 +101,41 @@ describe('a motor’s Service section', () => {
   }, 30_000);
 });
 
+describe('a motor’s record beside its service history', () => {
+  it('says on the motor’s own boxes when the history holds a later service and a higher hour meter', async () => {
+    setViewportWidth(PHONE_WIDTH);
+    const p = testPerson('supervisor');
+    mockApi({ 'GET /api/auth/me': p.me, 'GET /api/members': { status: 200, body: [] } });
+    const boatId = await createRecord(p.seed, 'boat', boatFields({ fleetNumber: 'IRB 2', name: 'Gannet' }));
+    // The motor's record says 90 h at a service 200 days ago; the history has one at 140 h, 20 days ago.
+    const motorId = await createRecord(p.seed, 'motor', motorFields({
+      boatId, hourMeter: 120, lastServiceAt: noonOn(addDays(today(), -200)), lastServiceHours: 90,
+    }));
+    const servicedOn = addDays(today(), -20);
+    await createRecord(p.seed, 'serviceRecord', {
+      motorId, servicedAt: noonOn(servicedOn), engineHours: 140, work: 'Plugs and impeller', parts: '', performedBy: 'Gear officer',
+    });
+    renderApp(`/fleet/motors/${motorId}`, p.session);
+    expect(await screen.findByText(
+      `The service history below has a later one: ${dayWords(servicedOn)} at 140.0 h. The due counts from that; these two boxes keep a service from before the history.`,
+    )).toBeInTheDocument();
+    expect(screen.getByText('Trips and services have logged up to 140.0 h; the due counts from that.')).toBeInTheDocument();
+    expect(screen.getByLabelText('Hour meter (h)')).toHaveValue('120');
+  });
+
+  it('says nothing on the motor’s boxes when its record is the latest word', async () => {
+    setViewportWidth(PHONE_WIDTH);
+    const p = testPerson('supervisor');
+    mockApi({ 'GET /api/auth/me': p.me, 'GET /api/members': { status: 200, body: [] } });
+    const motorId = await createRecord(p.seed, 'motor', motorFields({ boatId: null, hourMeter: 120, lastServiceAt: noonOn(addDays(today(), -5)), lastServiceHours: 118 }));
+    renderApp(`/fleet/motors/${motorId}`, p.session);
+    const section = within(await screen.findByRole('region', { name: 'Service' }));
+    expect(await section.findByText(`Last service ${dayWords(addDays(today(), -5))} at 118.0 h · hour meter now 120.0 h`)).toBeInTheDocument();
+    expect(screen.queryByText(/The service history below has a later one/)).toBeNull();
+    expect(screen.queryByText(/Trips and services have logged up to/)).toBeNull();
+  });
+});
+
 describe('Today with a motor past its service', () => {
   it('shows the boat limited, with the motor’s service as the reason', async () => {
     setViewportWidth(PHONE_WIDTH);

@@ -3,27 +3,23 @@ import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Typography from '@mui/material/Typography';
 import { kindSpec, roleAtLeast, utcToLocal } from '@breakline/sync-protocol';
-import { useRecords } from '@/db/hooks';
 import type { LocalRecord } from '@/db/types';
 import { useSession } from '@/features/auth/use-auth';
 import { SectionCard } from '../components/section-card';
 import { useNow } from '../hooks/use-now';
-import { motorService, servicesOf } from './motor-service';
+import { motorService, servicesOf, type ServiceSources } from './motor-service';
 import { ServiceForm } from './service-form';
 import { ServiceHistory } from './service-history';
 import { ServiceStateLine } from './service-state-line';
 import { dayWords, dueWords, forecastWords } from './service-words';
 
 /** A motor's service: where it stands, when the next falls due, recording one, and the history. */
-export function ServiceSection({ motor }: { motor: LocalRecord<'motor'> }) {
-  const serviceRecords = useRecords('serviceRecord');
-  const trips = useRecords('trip');
+export function ServiceSection({ motor, sources }: { motor: LocalRecord<'motor'>; sources: ServiceSources }) {
   const { activeClub } = useSession();
   const now = useNow();
   const [recording, setRecording] = useState(false);
-  if (!serviceRecords || !trips) return null;
   const zone = activeClub.timeZone;
-  const service = motorService(motor, { serviceRecords, trips }, now, zone);
+  const service = motorService(motor, sources, now, zone);
   const forecast = forecastWords(service);
   const mayRecord = roleAtLeast(activeClub.role, kindSpec('serviceRecord').access.create);
   const last = service.last;
@@ -55,7 +51,7 @@ export function ServiceSection({ motor }: { motor: LocalRecord<'motor'> }) {
         />
       )}
       <Typography variant="subtitle1" component="h3" sx={{ fontWeight: 700, mt: 1 }}>Service history</Typography>
-      <ServiceHistory records={servicesOf(motor.id, serviceRecords)} zone={zone} />
+      <ServiceHistory records={servicesOf(motor.id, sources.serviceRecords)} zone={zone} />
     </SectionCard>
   );
 }
