@@ -25,7 +25,7 @@ function notesOf(draft: MotorDraft, logged: LoggedService | undefined): Partial<
   const notes: Partial<Record<Key, string>> = {};
   if (!logged) return notes;
   const typed = Number(draft.hourMeter.trim().replace(',', '.'));
-  if (Number.isFinite(typed) && logged.hourMeter > typed) {
+  if (logged.hourMeter !== null && Number.isFinite(typed) && logged.hourMeter > typed) {
     notes.hourMeter = `Trips and services have logged up to ${logged.hourMeter.toFixed(1)} h; the due counts from that.`;
   }
   const last = logged.last;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { local, motorFields, tripFields } from '../testing/records';
-import { hourMeterNow, lastService, motorService } from './motor-service';
+import { hourMeterNow, lastService, loggedService, motorService } from './motor-service';
 import { buildService, newServiceDraft } from './service-draft';
 import { dayWords, dueWords, forecastWords } from './service-words';
 
@@ -28,6 +28,17 @@ describe('a motor’s service from its records', () => {
     expect(s.status).toBe('ok');
     expect(dueWords(s)).toBe('Due in 12.5 engine hours or on 14 Feb 2027, whichever comes first.');
     expect(forecastWords(s)).toBe('At the use of the last 30 days, the hours fall due about 20 Jan 2027.');
+  });
+
+  it('tells the motor’s editor what its history logged, leaving out the record’s own figures', () => {
+    const records = [service('2026-02-14T01:00:00Z', 100)];
+    expect(loggedService(motor, { serviceRecords: records, trips }, ZONE)).toEqual({
+      last: { date: '2026-02-14', hours: 100, recordId: records[0]!.id }, hourMeter: 187.5,
+    });
+    // Nothing logged: the record's 120 h is not a reading from elsewhere, and its service is the last.
+    expect(loggedService(motor, { serviceRecords: [], trips: [] }, ZONE)).toEqual({
+      last: { date: '2025-11-01', hours: 20, recordId: null }, hourMeter: null,
+    });
   });
 
   it('keeps the motor record’s service when it is later than every service record', () => {

@@ -60,19 +60,25 @@ export function lastService(motor: LocalRecord<'motor'>, records: readonly Local
 export interface LoggedService {
   /** The latest service; from a service record when `recordId` is set. */
   last: LastService | null;
-  hourMeter: number;
+  /** The highest hour meter its trips and service records logged; null when none did. */
+  hourMeter: number | null;
 }
 
 export function loggedService(motor: LocalRecord<'motor'>, sources: ServiceSources, zone: string): LoggedService {
-  return { last: lastService(motor, sources.serviceRecords, zone), hourMeter: hourMeterNow(motor, sources) };
+  return { last: lastService(motor, sources.serviceRecords, zone), hourMeter: loggedHours(motor.id, sources) };
+}
+
+/** The highest hour meter reading the motor's trips (at retrieval) and service records logged. */
+function loggedHours(motorId: string, sources: ServiceSources): number | null {
+  let hours: number | null = null;
+  for (const { fields: t } of sources.trips) if (t.motorId === motorId && t.engineHoursEnd !== null) hours = Math.max(hours ?? t.engineHoursEnd, t.engineHoursEnd);
+  for (const { fields: s } of sources.serviceRecords) if (s.motorId === motorId) hours = Math.max(hours ?? s.engineHours, s.engineHours);
+  return hours;
 }
 
 /** The hour meter now: the record's reading may lag a trip's closing reading or a service's. */
 export function hourMeterNow(motor: LocalRecord<'motor'>, sources: ServiceSources): number {
-  let hours = motor.fields.hourMeter;
-  for (const { fields: t } of sources.trips) if (t.motorId === motor.id && t.engineHoursEnd !== null) hours = Math.max(hours, t.engineHoursEnd);
-  for (const { fields: s } of sources.serviceRecords) if (s.motorId === motor.id) hours = Math.max(hours, s.engineHours);
-  return hours;
+  return Math.max(motor.fields.hourMeter, loggedHours(motor.id, sources) ?? 0);
 }
 
 /**
