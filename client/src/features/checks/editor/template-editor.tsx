@@ -55,7 +55,9 @@ function EditorBody({ checkType, templates, boats }: { checkType: CheckType; tem
   const shownKey = JSON.stringify(shown);
   const errors = useMemo(() => JSON.parse(shownKey) as TemplateErrors, [shownKey]);
   const chambers = useMemo(() => chamberChoices(boats), [boats]);
-  const unchanged = current !== undefined && built.ok && sameContent(built.fields, current.fields);
+  // Just saved, until the list of versions holds the new one: what is shown is what was saved.
+  const settling = saved !== null && (current?.fields.templateVersion ?? 0) < saved;
+  const unchanged = settling || (current !== undefined && built.ok && sameContent(built.fields, current.fields));
 
   // A version saved elsewhere replaces an untouched draft; edits are kept, with a warning.
   const baseFields = store.baseId === null ? DEFAULTS[checkType] : templates.find((t) => t.id === store.baseId)?.fields;
