@@ -11,7 +11,7 @@ import { useSession } from '@/features/auth/use-auth';
 import { motorDraftOf, newMotorDraft } from './motor-draft';
 import { MotorForm } from './motor-form';
 import { ReadOnlyNote } from './read-only-note';
-import { loggedService } from '../service/motor-service';
+import { loggedService } from './logged-service';
 import { ServiceSection } from '../service/service-section';
 
 /** A motor's page: its record (editable by supervisors and admins) and, below, `history`. */

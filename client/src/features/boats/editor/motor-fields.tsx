@@ -4,7 +4,7 @@ import TextField from '@mui/material/TextField';
 import type { LocalRecord } from '@/db/types';
 import type { DraftErrors } from './boat-draft';
 import type { MotorDraft } from './motor-draft';
-import type { LoggedService } from '../service/motor-service';
+import type { LoggedService } from './logged-service';
 import { dayWords } from '../service/service-words';
 
 type Key = Exclude<keyof MotorDraft, 'fuelMode' | 'storedService'>;

@@ -10,7 +10,7 @@ import type { DraftErrors } from './boat-draft';
 import { buildMotor, type MotorDraft } from './motor-draft';
 import { MotorFields } from './motor-fields';
 import { useLocalSave } from '@/lib/use-local-save';
-import type { LoggedService } from '../service/motor-service';
+import type { LoggedService } from './logged-service';
 
 interface Props {
   motorId: string | null;

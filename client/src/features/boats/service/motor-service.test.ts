@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { local, motorFields, tripFields } from '../testing/records';
-import { hourMeterNow, lastService, loggedService, motorService } from './motor-service';
+import { loggedService } from '../editor/logged-service';
+import { hourMeterNow, lastService, motorService } from './motor-service';
 import { buildService, newServiceDraft } from './service-draft';
 import { dayWords, dueWords, forecastWords } from './service-words';
 

@@ -56,20 +56,8 @@ export function lastService(motor: LocalRecord<'motor'>, records: readonly Local
   return fromMotor ? { date: utcToLocal(fromMotor.at, zone).date, hours: fromMotor.hours, recordId: null } : null;
 }
 
-/** What the motor's service records and trips say beside its own record, for its editor. */
-export interface LoggedService {
-  /** The latest service; from a service record when `recordId` is set. */
-  last: LastService | null;
-  /** The highest hour meter its trips and service records logged; null when none did. */
-  hourMeter: number | null;
-}
-
-export function loggedService(motor: LocalRecord<'motor'>, sources: ServiceSources, zone: string): LoggedService {
-  return { last: lastService(motor, sources.serviceRecords, zone), hourMeter: loggedHours(motor.id, sources) };
-}
-
 /** The highest hour meter reading the motor's trips (at retrieval) and service records logged. */
-function loggedHours(motorId: string, sources: ServiceSources): number | null {
+export function loggedHours(motorId: string, sources: ServiceSources): number | null {
   let hours: number | null = null;
   for (const { fields: t } of sources.trips) if (t.motorId === motorId && t.engineHoursEnd !== null) hours = Math.max(hours ?? t.engineHoursEnd, t.engineHoursEnd);
   for (const { fields: s } of sources.serviceRecords) if (s.motorId === motorId) hours = Math.max(hours ?? s.engineHours, s.engineHours);
