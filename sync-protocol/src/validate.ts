@@ -17,43 +17,60 @@ function notAnObject(value: unknown): boolean {
   return typeof value !== 'object' || value === null || Array.isArray(value);
 }
 
-/**
- * The path to the first text (a value or a key, at any depth) holding the NUL character, which
- * PostgreSQL cannot store in text or JSON; undefined when there is none. Nothing a person types
- * holds one, so a change with it is refused here, on the phone and on the server alike, rather
- * than failing the whole push when it is written.
- */
-function nulAt(value: unknown): string[] | undefined {
-  return hasNul(value) ? pathToNul(value, []) : undefined;
+/** Half of a surrogate pair with no other half: a broken emoji or symbol (a copy cut in two). */
+const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?:^|[^\uD800-\uDBFF])[\uDC00-\uDFFF]/;
+
+type BadText = 'nul' | 'broken';
+
+/** Why PostgreSQL could not store this text, or undefined when it can. */
+function badText(s: string): BadText | undefined {
+  if (s.includes('\u0000')) return 'nul';
+  const wellFormed = (s as { isWellFormed?: () => boolean }).isWellFormed;
+  if (typeof wellFormed === 'function' ? !wellFormed.call(s) : LONE_SURROGATE.test(s)) return 'broken';
+  return undefined;
 }
 
 /** The quick test, allocating nothing: every push runs it over every change. */
-function hasNul(value: unknown): boolean {
-  if (typeof value === 'string') return value.includes('\u0000');
+function hasBadText(value: unknown): boolean {
+  if (typeof value === 'string') return badText(value) !== undefined;
   if (typeof value !== 'object' || value === null) return false;
   if (Array.isArray(value)) {
-    for (const v of value) if (hasNul(v)) return true;
+    for (const v of value) if (hasBadText(v)) return true;
     return false;
   }
-  for (const k in value) if (k.includes('\u0000') || hasNul((value as Record<string, unknown>)[k])) return true;
+  for (const k in value) if (badText(k) !== undefined || hasBadText((value as Record<string, unknown>)[k])) return true;
   return false;
 }
 
-function pathToNul(value: unknown, path: string[]): string[] | undefined {
-  if (typeof value === 'string') return value.includes('\u0000') ? path : undefined;
+function pathToBadText(value: unknown, path: string[]): { path: string[]; why: BadText } | undefined {
+  if (typeof value === 'string') {
+    const why = badText(value);
+    return why ? { path, why } : undefined;
+  }
   if (typeof value !== 'object' || value === null) return undefined;
   for (const [k, v] of Object.entries(value)) {
-    if (k.includes('\u0000')) return [...path, k];
-    const found = pathToNul(v, [...path, k]);
+    const inKey = badText(k);
+    if (inKey) return { path: [...path, k], why: inKey };
+    const found = pathToBadText(v, [...path, k]);
     if (found) return found;
   }
   return undefined;
 }
 
-function nulRefused(value: unknown): Validation<never> | undefined {
-  const at = nulAt(value);
-  if (!at) return undefined;
-  return { ok: false, errors: [{ field: at.join('.'), message: `${at[0] ? `The ${fieldLabel([at[0]])}` : 'This text'} holds an invisible control character (NUL) that cannot be saved; retype it or paste it again as plain text.` }] };
+/**
+ * Text PostgreSQL cannot store, in a value or a key at any depth: the NUL character (in neither
+ * text nor JSON) and half of a surrogate pair (not in JSON). Nothing a person types holds either,
+ * so a change with one is refused here, on the phone and on the server alike, rather than
+ * failing the whole push when it is written.
+ */
+function badTextRefused(value: unknown): Validation<never> | undefined {
+  if (!hasBadText(value)) return undefined;
+  const { path: at, why } = pathToBadText(value, [])!;
+  const what = at[0] ? `The ${fieldLabel([at[0]])}` : 'This text';
+  const message = why === 'nul'
+    ? `${what} holds an invisible control character (NUL) that cannot be saved; retype it or paste it again as plain text.`
+    : `${what} holds a broken character (half of an emoji or symbol) that cannot be saved; retype it or paste it again.`;
+  return { ok: false, errors: [{ field: at.join('.'), message }] };
 }
 
 /** The zod schema of a whole record's fields (strict: unknown fields are refused). */
@@ -73,8 +90,8 @@ export function patchSchema(kind: RecordKind): z.ZodType {
 export function validatePatch<K extends RecordKind>(kind: K, patch: unknown): Validation<Partial<KindFields[K]>> {
   if (!isRecordKind(kind)) return unknownKind(kind);
   if (notAnObject(patch)) return { ok: false, errors: [{ field: '', message: 'A change must be a group of fields.' }] };
-  const nul = nulRefused(patch);
-  if (nul) return nul;
+  const bad = badTextRefused(patch);
+  if (bad) return bad;
   const spec = kindSpec(kind);
   const r = patchSchema(kind).safeParse(patch, { error: predicateFor });
   if (!r.success) return { ok: false, errors: toFieldErrors(r.error.issues, spec.label) };
@@ -85,8 +102,8 @@ export function validatePatch<K extends RecordKind>(kind: K, patch: unknown): Va
 export function validateRecord<K extends RecordKind>(kind: K, fields: unknown): Validation<KindFields[K]> {
   if (!isRecordKind(kind)) return unknownKind(kind);
   if (notAnObject(fields)) return { ok: false, errors: [{ field: '', message: 'A record must be a group of fields.' }] };
-  const nul = nulRefused(fields);
-  if (nul) return nul;
+  const bad = badTextRefused(fields);
+  if (bad) return bad;
   const spec = kindSpec(kind);
   const r = spec.schema.safeParse(fields, { error: predicateFor });
   if (!r.success) return { ok: false, errors: toFieldErrors(r.error.issues, spec.label) };
@@ -109,7 +126,7 @@ type FieldSchemas = Record<string, z.ZodType>;
  * of a refused patch, ask validatePatch.
  */
 export function patchIsValid(kind: RecordKind, patch: unknown): boolean {
-  if (!isRecordKind(kind) || notAnObject(patch) || hasNul(patch)) return false;
+  if (!isRecordKind(kind) || notAnObject(patch) || hasBadText(patch)) return false;
   const shape = (patchSchema(kind) as unknown as { shape: FieldSchemas }).shape;
   for (const k of Object.keys(patch as object)) {
     if (!hasOwn(shape, k) || !shape[k]!.safeParse((patch as Record<string, unknown>)[k]).success) return false;
@@ -130,7 +147,7 @@ export function validateChangedRecord<K extends RecordKind>(
   const shape = spec.schema.shape as FieldSchemas;
   const value: Record<string, unknown> = { ...known };
   for (const k of changed) {
-    const r = hasOwn(shape, k) && !hasNul(fields[k]) ? shape[k]!.safeParse(fields[k]) : undefined;
+    const r = hasOwn(shape, k) && !hasBadText(fields[k]) ? shape[k]!.safeParse(fields[k]) : undefined;
     if (!r?.success) return validateRecord(kind, fields);
     if (r.data === undefined) delete value[k];
     else value[k] = r.data;

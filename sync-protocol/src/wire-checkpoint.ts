@@ -13,7 +13,8 @@ export interface Checkpoint {
   seq: number;
 }
 
-export const CHECKPOINT_PATTERN = /^(?:\d{1,19}\.)?\d{1,19}$/;
+/** Fifteen digits at most: every value stays a safe integer in JavaScript and a bigint in PostgreSQL. */
+export const CHECKPOINT_PATTERN = /^(?:\d{1,15}\.)?\d{1,15}$/;
 
 /** The start of everything: what a replica without a checkpoint pulls from. */
 export const FIRST_CHECKPOINT: Checkpoint = { horizon: 0, seq: 0 };
@@ -35,9 +36,10 @@ export function formatCheckpoint(c: Checkpoint): string {
  * so it has to drop its copy and pull from the start. A replica with nothing (seq 0) never does;
  * nor does one at or past the horizon. Below it, a checkpoint given out under the current horizon
  * belongs to a pull that started after the purge; an older horizon means the purge came since.
- * A horizon the server never had (a restored database) is treated as stale too.
+ * A horizon or a seq the server never had (a database restored from a backup) is stale too: the
+ * changes since the backup were given those numbers once and will be given them again.
  */
-export function needsFreshStart(c: Checkpoint, purgedThrough: number): boolean {
-  if (c.horizon > purgedThrough) return true;
+export function needsFreshStart(c: Checkpoint, purgedThrough: number, lastSeq: number): boolean {
+  if (c.horizon > purgedThrough || c.seq > lastSeq) return true;
   return c.seq > 0 && c.seq < purgedThrough && c.horizon < purgedThrough;
 }

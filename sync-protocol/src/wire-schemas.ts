@@ -16,10 +16,13 @@ export const DeviceIdSchema = z.string().regex(HLC_NODE_PATTERN, {
 
 export const HlcStringSchema = z.string().refine(isEncodedHlc, { error: 'must be an encoded clock value' });
 
+/** A device's seq is stored as a 32-bit integer on the server; a phone counts one a change. */
+export const MAX_DEVICE_SEQ = 2_147_483_647;
+
 export const MutationSchema = z
   .strictObject({
     mutationId: z.uuid(),
-    seq: z.number().int().min(1),
+    seq: z.number().int().min(1).max(MAX_DEVICE_SEQ, { error: `must be at most ${MAX_DEVICE_SEQ}` }),
     recordId: z.uuid(),
     kind: z.enum(RECORD_KINDS),
     baseVersion: z.number().int().min(0),
@@ -69,7 +72,7 @@ function isFields(v: unknown): boolean {
 
 function isMutation(o: unknown): boolean {
   return isJsonObject(o) && onlyKeys(o, MUTATION_KEYS)
-    && typeof o.mutationId === 'string' && UUID.test(o.mutationId) && isInt(o.seq, 1)
+    && typeof o.mutationId === 'string' && UUID.test(o.mutationId) && isInt(o.seq, 1) && (o.seq as number) <= MAX_DEVICE_SEQ
     && typeof o.recordId === 'string' && UUID.test(o.recordId) && KINDS.has(o.kind) && isInt(o.baseVersion, 0)
     && isFields(o.base) && isEncodedHlc(o.hlc) && isFields(o.patch)
     && (o.deleted === true || (!('deleted' in o) && Object.keys(o.patch as object).length > 0));

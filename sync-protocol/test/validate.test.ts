@@ -36,6 +36,34 @@ describe('record validation', () => {
     expect(validatePatch('defect', { description: 'Strap frayed near the bow' }).ok).toBe(true);
   });
 
+  it('refuses text holding half of a surrogate pair, in a value or a key, and keeps whole emoji', () => {
+    // JSON text must be well-formed UTF-16 to become UTF-8; PostgreSQL's jsonb refuses a lone
+    // surrogate (its JSON types documentation, on \u escapes).
+    for (const broken of ['Strap \ud83d frayed', 'Strap \ude00 frayed', 'frayed \ud83d']) {
+      expect(errorsOf(validatePatch('defect', { description: broken }))).toEqual([{
+        field: 'description',
+        message: 'The description holds a broken character (half of an emoji or symbol) that cannot be saved; retype it or paste it again.',
+      }]);
+      expect(patchIsValid('defect', { description: broken })).toBe(false);
+    }
+    const check = FIXTURES.check as Record<string, unknown>;
+    expect(errorsOf(validateRecord('check', { ...check, results: { hull: { outcome: 'fail', note: 'Split \udc00' } } }))[0]!.field).toBe('results.hull.note');
+    expect(errorsOf(validatePatch('check', { results: { 'hu\ud800ll': { outcome: 'pass' } } }))[0]!.field).toBe('results.hu\ud800ll');
+    expect(validatePatch('defect', { description: 'Strap frayed \ud83d\ude00 near the bow' }).ok).toBe(true);
+  });
+
+  it('finds half a surrogate pair the same way where the browser has no isWellFormed', () => {
+    const proto = String.prototype as { isWellFormed?: () => boolean };
+    const own = proto.isWellFormed;
+    delete proto.isWellFormed;
+    try {
+      for (const broken of ['\ud83d', 'a\ud83d', '\ude00b', 'a\ude00\ud83d', 'ok \ud83d\ude00 \ud83d']) expect(patchIsValid('defect', { description: broken })).toBe(false);
+      for (const whole of ['plain', '\ud83d\ude00', 'a\ud83d\ude00b\ud83c\udf0a']) expect(patchIsValid('defect', { description: whole })).toBe(true);
+    } finally {
+      if (own) proto.isWellFormed = own;
+    }
+  });
+
   it('names the missing fields of a whole record', () => {
     const { description: _d, ...rest } = FIXTURES.defect;
     expect(errorsOf(validateRecord('defect', rest))).toEqual([{ field: 'description', message: 'Description is required.' }]);

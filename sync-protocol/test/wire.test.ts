@@ -51,20 +51,28 @@ describe('wire schemas', () => {
     expect(parseCheckpoint('42')).toEqual({ horizon: 0, seq: 42 });
     expect(parseCheckpoint('120.42')).toEqual({ horizon: 120, seq: 42 });
     expect(() => parseCheckpoint('yesterday')).toThrow(/not a checkpoint/);
+    // Sixteen digits could pass 2^53 and, at nineteen, PostgreSQL's bigint: refused as not a checkpoint.
+    expect(parseCheckpoint('999999999999999')).toEqual({ horizon: 0, seq: 999_999_999_999_999 });
+    expect(() => parseCheckpoint('9999999999999999')).toThrow(/not a checkpoint/);
+    expect(() => parseCheckpoint('1.9999999999999999')).toThrow(/not a checkpoint/);
     expect(formatCheckpoint({ horizon: 0, seq: 42 })).toBe('42');
     expect(formatCheckpoint({ horizon: 120, seq: 42 })).toBe('120.42');
   });
 
   it('sends back to the start only replicas that pulled below the horizon before it moved', () => {
     const purgedThrough = 100;
-    expect(needsFreshStart({ horizon: 0, seq: 0 }, purgedThrough)).toBe(false); // nothing held yet
-    expect(needsFreshStart({ horizon: 0, seq: 50 }, purgedThrough)).toBe(true); // pulled before the purge
-    expect(needsFreshStart({ horizon: 60, seq: 50 }, purgedThrough)).toBe(true); // before the latest purge
-    expect(needsFreshStart({ horizon: 100, seq: 50 }, purgedThrough)).toBe(false); // a fresh start since
-    expect(needsFreshStart({ horizon: 0, seq: 100 }, purgedThrough)).toBe(false); // saw every purged tombstone
-    expect(needsFreshStart({ horizon: 0, seq: 150 }, purgedThrough)).toBe(false);
-    expect(needsFreshStart({ horizon: 200, seq: 150 }, purgedThrough)).toBe(true); // a horizon this server never had
-    expect(needsFreshStart({ horizon: 0, seq: 50 }, 0)).toBe(false);
+    expect(needsFreshStart({ horizon: 0, seq: 0 }, purgedThrough, 500)).toBe(false); // nothing held yet
+    expect(needsFreshStart({ horizon: 0, seq: 50 }, purgedThrough, 500)).toBe(true); // pulled before the purge
+    expect(needsFreshStart({ horizon: 60, seq: 50 }, purgedThrough, 500)).toBe(true); // before the latest purge
+    expect(needsFreshStart({ horizon: 100, seq: 50 }, purgedThrough, 500)).toBe(false); // a fresh start since
+    expect(needsFreshStart({ horizon: 0, seq: 100 }, purgedThrough, 500)).toBe(false); // saw every purged tombstone
+    expect(needsFreshStart({ horizon: 0, seq: 150 }, purgedThrough, 500)).toBe(false);
+    expect(needsFreshStart({ horizon: 200, seq: 150 }, purgedThrough, 500)).toBe(true); // a horizon this server never had
+    expect(needsFreshStart({ horizon: 0, seq: 50 }, 0, 500)).toBe(false);
+    // A seq the server never gave out (a database restored from an older backup): start afresh.
+    expect(needsFreshStart({ horizon: 0, seq: 500 }, 0, 500)).toBe(false);
+    expect(needsFreshStart({ horizon: 0, seq: 501 }, 0, 500)).toBe(true);
+    expect(needsFreshStart({ horizon: 100, seq: 510 }, purgedThrough, 500)).toBe(true);
   });
 
   it('asks for a value exactly when settling with another value', () => {
@@ -141,5 +149,10 @@ describe('the hand-written push check', () => {
     const seqs = { protocolVersion: 1, deviceId: 'phone-1', mutations: [{ ...m, seq: 2 }, { ...m, seq: 2 }] };
     expect(isWellFormedPush(seqs)).toBe(false);
     expect(parsePushRequest(seqs).success).toBe(false);
+    // The server keeps a device's seq as a 32-bit integer: one past it is refused with a reason.
+    const top = { protocolVersion: 1, deviceId: 'phone-1', mutations: [{ ...m, seq: 2_147_483_647 }] };
+    expect(parsePushRequest(top).success).toBe(true);
+    const past = parsePushRequest({ ...top, mutations: [{ ...m, seq: 2_147_483_648 }] });
+    expect(past.success ? [] : past.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`)).toEqual(['mutations.0.seq: must be at most 2147483647']);
   });
 });

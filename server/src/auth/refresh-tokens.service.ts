@@ -43,7 +43,7 @@ export class RefreshTokensService {
 
   private async find(token: string): Promise<RefreshToken> {
     const [id, secret] = token.split('.');
-    if (!id || !secret || !/^[0-9a-f-]{36}$/i.test(id)) throw refused();
+    if (!id || !secret || !/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id)) throw refused();
     const row = await this.repo.findOne({ where: { id } });
     if (!row) throw refused();
     const a = Buffer.from(row.secretHash, 'hex');

@@ -11,7 +11,7 @@ export const linkToken = (id: string, secret: string) => `${id}.${secret}`;
 /** The row id and secret of a token, or null when it cannot be one of ours. */
 export function splitToken(token: string): { id: string; secret: string } | null {
   const [id, secret, extra] = token.trim().split('.');
-  if (extra !== undefined || !id || !secret || !/^[0-9a-f-]{36}$/i.test(id) || !/^[A-Za-z0-9_-]{20,100}$/.test(secret)) return null;
+  if (extra !== undefined || !id || !secret || !/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id) || !/^[A-Za-z0-9_-]{20,100}$/.test(secret)) return null;
   return { id, secret };
 }
 

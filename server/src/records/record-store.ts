@@ -20,6 +20,17 @@ export const recordStore = {
     return rows.map((r) => rowToRecord(kind, r));
   },
 
+  /**
+   * The kinds, of any club, that hold these ids: ids are unique across kinds, since a phone keys
+   * its records by id alone. One statement over every kind's primary key.
+   */
+  async kindsHolding(em: EntityManager, ids: string[]): Promise<Map<string, RecordKind>> {
+    if (!ids.length) return new Map();
+    const parts = ALL_KINDS.map((kind, i) => `SELECT id::text AS id, ${i} AS k FROM ${q(tableOf(kind))} WHERE id = ANY($1::uuid[])`);
+    const rows: { id: string; k: number }[] = await em.query(parts.join(' UNION ALL '), [ids]);
+    return new Map(rows.map((r) => [r.id, ALL_KINDS[r.k]!]));
+  },
+
   /** Inserts or replaces records in one statement (see upsertParts). */
   async upsertMany(em: EntityManager, kind: RecordKind, records: StoredRecord[]): Promise<void> {
     if (!records.length) return;

@@ -43,7 +43,7 @@ export class HistoryService {
        FROM sync_changes c
        LEFT JOIN memberships m ON m.club_id = c.club_id AND m.user_id = c.user_id
        LEFT JOIN users u ON u.id = m.user_id
-       WHERE c.club_id = $1 AND c.record_id = $2 ORDER BY c.seq`, [p.clubId, id]);
+       WHERE c.club_id = $1 AND c.record_id = $2 AND c.kind = $3 ORDER BY c.seq`, [p.clubId, id, kind]);
     const state: Record<string, unknown> = {};
     let deleted = false;
     const versions = rows.map((r): VersionDto => {

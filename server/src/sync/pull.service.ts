@@ -37,7 +37,7 @@ export class PullService {
     return this.db.transaction('REPEATABLE READ', async (em) => {
       const [state] = await em.query('SELECT last_seq, purged_through_seq FROM sync_club_state WHERE club_id = $1', [p.clubId]);
       const horizon = Number(state?.purged_through_seq ?? 0);
-      if (needsFreshStart(since, horizon)) {
+      if (needsFreshStart(since, horizon, Number(state?.last_seq ?? 0))) {
         const reset: PullResponse = { changes: [], checkpoint: formatCheckpoint({ horizon, seq: Number(state?.last_seq ?? 0) }), hasMore: false, resetRequired: true };
         return { json: JSON.stringify(reset), checkpoint: reset.checkpoint, hasMore: false };
       }

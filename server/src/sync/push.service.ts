@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { DataSource, type EntityManager } from 'typeorm';
 import {
-  applyMutation, deepEqual, HybridClock, parsePushRequest,
+  applyMutation, deepEqual, HybridClock, kindSpec, parsePushRequest,
   type ClubState, type Fields, type Mutation, type MutationResult, type PushResponse, type RecordKind, type StoredRecord,
 } from '@breakline/sync-protocol';
 import { AppError } from '../common/app-error.js';
@@ -12,6 +12,8 @@ import { deviceSeqPart, lockClubAndDevice, saveDeviceSeq } from './club-lock.js'
 import { assertProtocol } from './sync-errors.js';
 
 const NOT_FOUND = 'This record is not on the server, so the change could not be saved.';
+const takenId = (kind: RecordKind) =>
+  `This record's id is already taken by ${kindSpec(kind).label}, so it was not saved; make it again as a new record.`;
 
 /**
  * Push: one transaction a batch. The club's records that the batch touches are loaded in one
@@ -40,7 +42,7 @@ export class PushService {
     const locked = await lockClubAndDevice(em, p.clubId, deviceId);
     const { deviceSeq } = locked;
     // Duplicates are loaded too, so their answer carries the record's current version.
-    const { records, foreign } = await this.loadTouched(em, p.clubId, mutations);
+    const { records, foreign, otherKind } = await this.loadTouched(em, p.clubId, mutations);
     const club: ClubState = { records, changeSeq: locked.lastSeq, deviceSeq: { [deviceId]: deviceSeq }, conflicts: [], purgedThrough: locked.purgedThroughSeq };
     const auth = { userId: p.userId, role: p.role, clubId: p.clubId };
     const ctx = { club, auth, deviceId, pt: Date.now(), clock: this.clock, newId: () => crypto.randomUUID(), validated: new Map<Fields, Fields>() };
@@ -55,6 +57,11 @@ export class PushService {
       club.deviceSeq[deviceId] = m.seq;
       if (foreign.has(m.recordId)) {
         results.push({ mutationId: m.mutationId, status: 'rejected', error: { code: 'not-found', message: NOT_FOUND } });
+        continue;
+      }
+      const other = otherKind.get(m.recordId);
+      if (other !== undefined && other !== m.kind) {
+        results.push({ mutationId: m.mutationId, status: 'rejected', error: { code: 'invalid', message: takenId(other) } });
         continue;
       }
       // applyMutation replaces the record rather than changing it, so the old fields stay as they were.
@@ -76,7 +83,10 @@ export class PushService {
     return { results, lastSeq };
   }
 
-  /** The club's current records that the batch names; ids that belong to another club are set apart. */
+  /**
+   * The club's current records that the batch names; ids that belong to another club are set
+   * apart, and so are the kinds that hold the ids a batch would create under another kind.
+   */
   private async loadTouched(em: EntityManager, clubId: string, mutations: Mutation[]) {
     const byKind = new Map<RecordKind, Set<string>>();
     for (const m of mutations) (byKind.get(m.kind) ?? byKind.set(m.kind, new Set()).get(m.kind)!).add(m.recordId);
@@ -88,7 +98,10 @@ export class PushService {
         else foreign.add(r.id);
       }
     }
-    return { records, foreign };
+    // Only what would be made new needs the look across kinds; a record found is checked by kind in applyMutation.
+    const unseen = [...new Set(mutations.filter((m) => m.baseVersion === 0 && !records[m.recordId] && !foreign.has(m.recordId)).map((m) => m.recordId))];
+    const otherKind = await recordStore.kindsHolding(em, unseen);
+    return { records, foreign, otherKind };
   }
 
   private async write(em: EntityManager, clubId: string, club: ClubState, startSeq: number, changes: ChangeEntry[], also: ((params: unknown[]) => string)[] = []) {

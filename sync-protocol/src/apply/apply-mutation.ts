@@ -1,6 +1,6 @@
-import { decodeHlc, maxEncodedHlc } from '../hlc.js';
+import { decodeHlc, maxEncodedHlc, type Hlc } from '../hlc.js';
 import { assertNotAhead, type HybridClock } from '../hybrid-clock.js';
-import { ClockDriftError } from '../hlc-errors.js';
+import { ClockDriftError, HlcCounterOverflowError } from '../hlc-errors.js';
 import { patchIsValid, validateChangedRecord, validatePatch, validateRecord, describeErrors, type Validation } from '../validate.js';
 import { checkCreate, checkDelete, checkUpdate } from '../permissions.js';
 import { mergeMutation } from '../merge.js';
@@ -26,6 +26,20 @@ export interface ApplyContext {
 }
 
 const rejected = (m: Mutation, error: MutationError): MutationResult => ({ mutationId: m.mutationId, status: 'rejected', error });
+
+/**
+ * The server's clock follows the change's, so its own later stamps order after it. A clock whose
+ * counter is full (stamps far ahead, then many within one millisecond) stays where it is: the
+ * record keeps the change's own stamp, and one server's clock serves every club, so refusing here
+ * would refuse every club's changes until real time caught up.
+ */
+function receiveClock(clock: HybridClock, hlc: Hlc, pt: number): void {
+  try {
+    clock.receive(hlc, pt);
+  } catch (e) {
+    if (!(e instanceof HlcCounterOverflowError)) throw e;
+  }
+}
 
 /** Check, merge and write one mutation, as the real server does inside the batch transaction. */
 export function applyMutation(ctx: ApplyContext, m: Mutation): MutationResult {
@@ -86,7 +100,7 @@ export function applyMutation(ctx: ApplyContext, m: Mutation): MutationResult {
     if (!full.ok) return rejected(m, { code: 'invalid', message: `After merging with newer changes: ${describeErrors(full.errors)}`, fields: full.errors });
     ctx.validated?.set(fields, full.value);
   }
-  ctx.clock.receive(hlc, pt);
+  receiveClock(ctx.clock, hlc, pt);
   let record = stored;
   if (changed) {
     club.changeSeq += 1;

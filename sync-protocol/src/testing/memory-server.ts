@@ -71,7 +71,7 @@ export class MemorySyncServer {
     const horizon = club.purgedThrough;
     const since = parseCheckpoint(q.data.since);
     // A replica that pulled before purged tombstones may hold records that are gone.
-    if (needsFreshStart(since, horizon)) return { changes: [], checkpoint: formatCheckpoint({ horizon, seq: club.changeSeq }), hasMore: false, resetRequired: true };
+    if (needsFreshStart(since, horizon, club.changeSeq)) return { changes: [], checkpoint: formatCheckpoint({ horizon, seq: club.changeSeq }), hasMore: false, resetRequired: true };
     const after = Object.values(club.records).filter((r) => r.changeSeq > since.seq).sort((a, b) => a.changeSeq - b.changeSeq);
     const changes: SyncRecord[] = [];
     let checkpoint = since.seq;

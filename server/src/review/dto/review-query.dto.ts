@@ -6,6 +6,8 @@ const blankIsAbsent = () => Transform(({ value }) => (typeof value === 'string' 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 
 export const MAX_PAGE_SIZE = 200;
+/** Far past any club's records, and inside what PostgreSQL takes as an OFFSET. */
+export const MAX_PAGE = 100_000;
 
 /** Filters, order and page of a Review desk table; every filter is optional. */
 export class ReviewQueryDto {
@@ -45,7 +47,8 @@ export class ReviewQueryDto {
   dir?: 'asc' | 'desc';
 
   @ApiPropertyOptional({ default: 0 }) @IsOptional() @blankIsAbsent() @Type(() => Number)
-  @IsInt({ message: 'page must be a whole number from 0.' }) @Min(0, { message: 'page must be a whole number from 0.' })
+  @IsInt({ message: `page must be a whole number from 0 to ${MAX_PAGE}.` }) @Min(0, { message: `page must be a whole number from 0 to ${MAX_PAGE}.` })
+  @Max(MAX_PAGE, { message: `page must be a whole number from 0 to ${MAX_PAGE}.` })
   page?: number;
 
   @ApiPropertyOptional({ default: 50, maximum: MAX_PAGE_SIZE }) @IsOptional() @blankIsAbsent() @Type(() => Number)
