@@ -33,6 +33,24 @@ describe('sync refusals', () => {
     expect(changes.filter((c) => c.id === id).map((c) => c.kind)).toEqual(['defect']);
   });
 
+  it('refuses a replayed refusal again, with its reason, where a replayed success is a duplicate', async () => {
+    const phone = new TestDevice();
+    const captain = (await login(t, 'captain@gannetbay.example')) as typeof crew;
+    const body = phone.body([
+      phone.mutation('defect', uuid(), defectFields(boatId, captain.user.id)), // crew may not report in the captain's name
+      phone.mutation('defect', uuid(), defectFields(boatId, crew.user.id)),
+    ]);
+    const first = await push(crew.accessToken, body).expect(200);
+    expect(first.body.results.map((r: { status: string }) => r.status)).toEqual(['rejected', 'applied']);
+    // The answer was lost on the way: the phone sends the same batch again.
+    const again = await push(crew.accessToken, body).expect(200);
+    expect(again.body.results).toEqual([
+      { mutationId: body.mutations[0]!.mutationId, status: 'rejected', error: first.body.results[0].error },
+      { mutationId: body.mutations[1]!.mutationId, status: 'duplicate', version: 1 },
+    ]);
+    expect(again.body.lastSeq).toBe(first.body.lastSeq);
+  });
+
   it('goes on taking every club\'s changes after one stamped ahead with a full clock counter', async () => {
     // Four minutes ahead is inside the drift the server allows; the counter is one below its top,
     // so the server's clock would overflow on the next change it received.

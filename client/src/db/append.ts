@@ -1,4 +1,4 @@
-import { buildMutation, encodeHlc, HybridClock, type Fields, type LocalView, type RecordKind } from '@breakline/sync-protocol';
+import { buildMutation, encodeHlc, HybridClock, MAX_CLOCK_DRIFT_MS, type Fields, type LocalView, type RecordKind } from '@breakline/sync-protocol';
 import type { ReplicaDb } from './schema';
 import type { OutboxRow, RecordRow, ReplicaRow } from './types';
 import { uuid7 } from './uuid7';
@@ -27,8 +27,12 @@ export interface AppendInput {
  */
 export async function appendMutation(db: ReplicaDb, input: AppendInput, commit?: () => void): Promise<OutboxRow> {
   const { replica } = input;
-  // The clock is persisted, so an HLC never runs backwards across reloads even if the phone's time does.
-  const clock = new HybridClock(replica.deviceId, { initial: replica.clock });
+  // The clock is persisted, so an HLC never runs backwards across reloads even if the phone's time
+  // does; but a clock left further ahead than the server takes (the phone's time was wrong and has
+  // been put right) starts again from now, or every change until the wrong time came round again
+  // would be refused. The device's own order is its seq, not its clock.
+  const initial = replica.clock.l > input.now + MAX_CLOCK_DRIFT_MS ? { l: input.now, c: 0, node: replica.deviceId } : replica.clock;
+  const clock = new HybridClock(replica.deviceId, { initial });
   const hlc = encodeHlc(clock.now(input.now));
   const seq = replica.seq + 1;
   const mutation = buildMutation({

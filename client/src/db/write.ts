@@ -29,10 +29,10 @@ export interface WriteContext {
  * blur, not on each keystroke, so the queue stays at a few hundred a day.
  */
 
-const invalid = (errors: FieldError[]) =>
+export const invalid = (errors: FieldError[]) =>
   new LocalWriteError('invalid', errors.map((e) => e.message).join(' ') || 'This change is not valid.', errors);
 
-function guard(decision: { ok: true } | { ok: false; reason: string }): void {
+export function guard(decision: { ok: true } | { ok: false; reason: string }): void {
   if (!decision.ok) throw new LocalWriteError('forbidden', decision.reason);
 }
 
@@ -84,7 +84,7 @@ export async function createRecord<K extends RecordKind>(ctx: WriteContext, kind
  */
 export type RecordChange<K extends RecordKind> = Partial<KindFields[K]> | ((shown: KindFields[K]) => Partial<KindFields[K]>);
 
-function validPatch<K extends RecordKind>(kind: K, patch: unknown): Partial<KindFields[K]> {
+export function validPatch<K extends RecordKind>(kind: K, patch: unknown): Partial<KindFields[K]> {
   const valid = validatePatch(kind, patch);
   if (!valid.ok) throw invalid(valid.errors);
   return valid.value;

@@ -5,6 +5,11 @@ import type { ConflictSeenRow, OutboxRow, RejectedRow } from '@/db/types';
 import { recomposeRows, stillShown } from '@/db/view';
 import { photoRefs } from './photo-refs';
 
+const LOST_REFUSAL = {
+  code: 'invalid',
+  message: 'The server did not take this change on an earlier try, and its answer was lost on the way. What was entered is kept here: send it again, or enter it again.',
+} as const;
+
 function rejectedRow(entry: OutboxRow, r: MutationResult, at: string): RejectedRow {
   const row: RejectedRow = {
     mutationId: entry.mutation.mutationId,
@@ -40,7 +45,11 @@ export async function applyPushResults(db: ReplicaDb, batch: readonly OutboxRow[
         continue;
       }
       if (r.version === undefined) {
-        await db.outbox.delete(entry.seq); // a duplicate of a change that never made a record
+        // A duplicate of a change that left no record: a delete of one already gone is done; a
+        // change that would have made or changed one was refused on an earlier try whose answer
+        // was lost, before the server kept its refusals. It is kept in the refused list.
+        if (!entry.mutation.deleted) await db.rejected.put(rejectedRow(entry, { ...r, error: LOST_REFUSAL }, at));
+        await db.outbox.delete(entry.seq);
         continue;
       }
       photos.push(...photoRefs(entry.mutation.patch));

@@ -1,12 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { getRecord } from '@/db/queries';
 import { closeReplicas, openReplica } from '@/db/open';
+import { resendRejected } from '@/db/resend';
 import { createRecord, updateRecord } from '@/db/write';
 import { tokenStore } from '@/features/auth/token-store';
 import { sessionAnswer } from '@/test/fixtures';
 import { sessionAuth } from './auth-source';
 import { syncOnce } from './engine';
-import { FakeBackend } from './test/fake-backend';
+import { FakeBackend, readBody } from './test/fake-backend';
 import { defectFields, testDevice } from './test/device';
 
 describe('sync failures', () => {
@@ -81,5 +82,53 @@ describe('sync failures', () => {
     await ana.sync();
     expect(await getRecord(ana.db, ana.scope.clubId, 'defect', id)).toBeNull();
     expect(await ana.db.rejected.toArray()).toMatchObject([{ recordId: id, patch: defectFields(), error: { code: 'clock-drift' } }]);
+  });
+
+  it('hears a refusal again when the first answer was lost, and keeps the change in the refused list', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend);
+    const id = await createRecord(ana.writer, 'defect', defectFields());
+    await ana.sync();
+    backend.grant('token-crew', { userId: 'member-ana', role: 'crew', clubId: ana.scope.clubId });
+    await updateRecord(ana.writer, 'defect', id, { status: 'repaired' });
+    ana.auth.token = async () => 'token-crew';
+    backend.loseNextPushAnswer = true;
+    expect(await ana.sync()).toMatchObject({ ok: false });
+    expect(await ana.sync()).toEqual({ ok: true });
+    expect(await ana.db.rejected.toArray()).toMatchObject([{ recordId: id, patch: { status: 'repaired' }, error: { code: 'forbidden' } }]);
+  });
+
+  it('keeps a change the server answers as done without a record in the refused list, saying the answer was lost', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend);
+    const id = await createRecord(ana.writer, 'defect', defectFields());
+    backend.routes['POST /api/sync/push'] = async (init) => {
+      const body = (await readBody(init)) as { mutations: { mutationId: string; seq: number }[] };
+      const results = body.mutations.map((m) => ({ mutationId: m.mutationId, status: 'duplicate' }));
+      return new Response(JSON.stringify({ results, lastSeq: body.mutations.at(-1)!.seq }), { status: 200, headers: { 'content-type': 'application/json' } });
+    };
+    await ana.sync();
+    expect(await ana.db.outbox.count()).toBe(0);
+    const [kept] = await ana.db.rejected.toArray();
+    expect(kept).toMatchObject({ recordId: id, patch: defectFields() });
+    expect(kept!.error.message).toMatch(/answer was lost on the way/);
+  });
+
+  it('sends again, once the phone\'s time is right, a change refused for a clock far ahead, and new changes are not refused', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend);
+    const fast = { ...ana.writer, now: () => backend.now + 60 * 60_000 };
+    const early = await createRecord(fast, 'defect', defectFields({ description: 'Saved while the clock was an hour fast' }));
+    await ana.sync();
+    expect(await ana.db.rejected.toArray()).toMatchObject([{ recordId: early, error: { code: 'clock-drift' } }]);
+    // The time is put right: the next change is stamped from now, not from the hour-fast clock.
+    const later = await createRecord(ana.writer, 'defect', defectFields({ description: 'Saved after the clock was put right' }));
+    const [refused] = await ana.db.rejected.toArray();
+    await resendRejected(ana.writer, refused!);
+    expect(await ana.db.rejected.count()).toBe(0);
+    expect(await ana.sync()).toEqual({ ok: true });
+    expect(await ana.db.rejected.count()).toBe(0);
+    expect(backend.server.records(ana.scope.clubId).map((r) => r.id).sort()).toEqual([early, later].sort());
+    expect(await getRecord(ana.db, ana.scope.clubId, 'defect', early)).toMatchObject({ fields: { description: 'Saved while the clock was an hour fast' } });
   });
 });

@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import type { ConflictRecord, RecordKind, StoredRecord } from '@breakline/sync-protocol';
+import type { ConflictRecord, MutationError, RecordKind, StoredRecord } from '@breakline/sync-protocol';
 import { recordStore } from '../records/record-store.js';
 import { batchInput, type InputColumn } from '../records/batch-input.js';
 
@@ -78,4 +78,26 @@ export async function insertConflicts(em: EntityManager, conflicts: ConflictReco
       overruled_value: c.overruledValue ?? null, kept: c.kept, overruled: c.overruled, status: c.status, created_at: c.createdAt,
     })))],
   );
+}
+
+/** A refused change of a batch, kept so a replay of it gets the same answer. */
+export interface Refusal { mutationId: string; error: MutationError }
+
+/** Keeps the batch's refusals, in one statement; a replayed refusal is already there and stays as it was. */
+export async function insertRefusals(em: EntityManager, clubId: string, deviceId: string, refusals: Refusal[]) {
+  if (!refusals.length) return;
+  await em.query(
+    `INSERT INTO sync_refusals (club_id, mutation_id, device_id, error)
+     SELECT $1, x.mutation_id, $2, x.error FROM jsonb_to_recordset($3::jsonb) AS x(mutation_id uuid, error jsonb)
+     ON CONFLICT DO NOTHING`,
+    [clubId, deviceId, JSON.stringify(refusals.map((r) => ({ mutation_id: r.mutationId, error: r.error })))],
+  );
+}
+
+/** The refusals kept for these mutation ids, by id. */
+export async function loadRefusals(em: EntityManager, clubId: string, mutationIds: string[]): Promise<Map<string, MutationError>> {
+  if (!mutationIds.length) return new Map();
+  const rows: { mutation_id: string; error: MutationError }[] = await em.query(
+    'SELECT mutation_id, error FROM sync_refusals WHERE club_id = $1 AND mutation_id = ANY($2::uuid[])', [clubId, mutationIds]);
+  return new Map(rows.map((r) => [r.mutation_id, r.error]));
 }

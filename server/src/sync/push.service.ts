@@ -2,12 +2,12 @@ import { Injectable } from '@nestjs/common';
 import { DataSource, type EntityManager } from 'typeorm';
 import {
   applyMutation, deepEqual, HybridClock, kindSpec, parsePushRequest,
-  type ClubState, type Fields, type Mutation, type MutationResult, type PushResponse, type RecordKind, type StoredRecord,
+  type ClubState, type Fields, type Mutation, type MutationError, type MutationResult, type PushResponse, type RecordKind, type StoredRecord,
 } from '@breakline/sync-protocol';
 import { AppError } from '../common/app-error.js';
 import type { Principal } from '../auth/principal.js';
 import { recordStore } from '../records/record-store.js';
-import { insertConflicts, writeChanges, type ChangeEntry } from './change-log.js';
+import { insertConflicts, insertRefusals, loadRefusals, writeChanges, type ChangeEntry, type Refusal } from './change-log.js';
 import { deviceSeqPart, lockClubAndDevice, saveDeviceSeq } from './club-lock.js';
 import { assertProtocol } from './sync-errors.js';
 
@@ -48,20 +48,34 @@ export class PushService {
     const ctx = { club, auth, deviceId, pt: Date.now(), clock: this.clock, newId: () => crypto.randomUUID(), validated: new Map<Fields, Fields>() };
     const results: MutationResult[] = [];
     const changes: ChangeEntry[] = [];
+    const refusals: Refusal[] = [];
+    // A replay of a change refused before gets that refusal again: "duplicate" would tell the
+    // phone it had been taken, and the phone would drop it.
+    const replayed = mutations.filter((m) => m.seq <= deviceSeq).map((m) => m.mutationId);
+    const refusedBefore = await loadRefusals(em, p.clubId, replayed);
+    const refuse = (m: Mutation, error: MutationError) => {
+      results.push({ mutationId: m.mutationId, status: 'rejected', error });
+      refusals.push({ mutationId: m.mutationId, error });
+    };
     for (const m of mutations) {
       if (m.seq <= (club.deviceSeq[deviceId] ?? 0)) {
+        const error = refusedBefore.get(m.mutationId);
+        if (error) {
+          results.push({ mutationId: m.mutationId, status: 'rejected', error });
+          continue;
+        }
         const rec = club.records[m.recordId];
         results.push({ mutationId: m.mutationId, status: 'duplicate', ...(rec ? { version: rec.version } : {}) });
         continue;
       }
       club.deviceSeq[deviceId] = m.seq;
       if (foreign.has(m.recordId)) {
-        results.push({ mutationId: m.mutationId, status: 'rejected', error: { code: 'not-found', message: NOT_FOUND } });
+        refuse(m, { code: 'not-found', message: NOT_FOUND });
         continue;
       }
       const other = otherKind.get(m.recordId);
       if (other !== undefined && other !== m.kind) {
-        results.push({ mutationId: m.mutationId, status: 'rejected', error: { code: 'invalid', message: takenId(other) } });
+        refuse(m, { code: 'invalid', message: takenId(other) });
         continue;
       }
       // applyMutation replaces the record rather than changing it, so the old fields stay as they were.
@@ -69,9 +83,11 @@ export class PushService {
       const prevSeq = club.changeSeq;
       const result = applyMutation(ctx, m);
       results.push(result);
+      if (result.status === 'rejected' && result.error) refusals.push({ mutationId: m.mutationId, error: result.error });
       if (club.changeSeq > prevSeq) changes.push(changeEntry(club.records[m.recordId]!, before?.fields, m, result));
     }
     const lastSeq = club.deviceSeq[deviceId] ?? deviceSeq;
+    await insertRefusals(em, p.clubId, deviceId, refusals);
     // Each trip to the database waits its turn for the processor on a busy machine: the device's
     // seq goes with the changes when there are any.
     if (changes.length) {

@@ -3,7 +3,7 @@ import { canSee } from '../permissions.js';
 import { parsePushRequest, PullQuerySchema } from '../wire-schemas.js';
 import { formatCheckpoint, needsFreshStart, parseCheckpoint } from '../wire-checkpoint.js';
 import { PROTOCOL_VERSION } from '../wire.js';
-import type { ConflictRecord, MutationResult, PullResponse, PushResponse, SettleRequest, SyncRecord } from '../wire.js';
+import type { ConflictRecord, MutationError, MutationResult, PullResponse, PushResponse, SettleRequest, SyncRecord } from '../wire.js';
 import { cloneJson } from '../deep-equal.js';
 import { applyMutation } from '../apply/apply-mutation.js';
 import { settleConflict } from '../apply/settle.js';
@@ -29,6 +29,8 @@ export class MemorySyncServer {
   private clubs = new Map<string, ClubState>();
   private readonly clock = new HybridClock('server');
   private readonly newId: () => string;
+  /** Refused changes by club and mutation id: a replay of one is refused again, as on the server. */
+  private readonly refusals = new Map<string, MutationError>();
 
   constructor(options: MemoryServerOptions = {}) {
     this.newId = options.newId ?? counterIds();
@@ -52,6 +54,11 @@ export class MemorySyncServer {
     for (const m of mutations) {
       const last = club.deviceSeq[deviceId] ?? 0;
       if (m.seq <= last) {
+        const error = this.refusals.get(`${auth.clubId} ${m.mutationId}`);
+        if (error) {
+          results.push({ mutationId: m.mutationId, status: 'rejected', error });
+          continue;
+        }
         const rec = club.records[m.recordId];
         results.push({ mutationId: m.mutationId, status: 'duplicate', ...(rec ? { version: rec.version } : {}) });
         continue;
@@ -60,6 +67,7 @@ export class MemorySyncServer {
       club.deviceSeq[deviceId] = m.seq;
     }
     this.clubs.set(auth.clubId, club);
+    for (const r of results) if (r.status === 'rejected' && r.error) this.refusals.set(`${auth.clubId} ${r.mutationId}`, r.error);
     return { results, lastSeq: club.deviceSeq[deviceId] ?? 0 };
   }
 

@@ -6,7 +6,12 @@ import DialogContent from '@mui/material/DialogContent';
 import DialogTitle from '@mui/material/DialogTitle';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
+import { useState } from 'react';
+import { useReplica } from '@/db/hooks';
 import type { ReplicaDb } from '@/db/schema';
+import type { RejectedRow } from '@/db/types';
+import { resendRejected } from '@/db/resend';
+import { isLocalWriteError } from '@/db/write-error';
 import { STORAGE_NOT_PERSISTED } from '../persist';
 import type { SyncRunner } from '../runner';
 import { dismissRejected, retryPhoto, type SyncStatus as Status } from '../status';
@@ -24,6 +29,19 @@ interface Props {
 
 /** The sync details behind the top bar's status: what waits, when it last synced, what went wrong. */
 export function SyncDetailsDialog({ open, onClose, s, now, db, runner }: Props) {
+  const ctx = useReplica();
+  /** Why a refused change could not be queued again, by its mutation id. */
+  const [resendErrors, setResendErrors] = useState<Record<string, string>>({});
+  const sendAgain = async (r: RejectedRow) => {
+    try {
+      await resendRejected(ctx, r);
+      setResendErrors(({ [r.mutationId]: _gone, ...rest }) => rest);
+      runner.requestSync();
+    } catch (e) {
+      if (!isLocalWriteError(e)) throw e;
+      setResendErrors((old) => ({ ...old, [r.mutationId]: `Not sent again: ${e.message}` }));
+    }
+  };
   const conflicts = conflictsText(s.openConflicts);
   const photos = photosWaitingText(s.photosWaiting);
   return (
@@ -41,9 +59,15 @@ export function SyncDetailsDialog({ open, onClose, s, now, db, runner }: Props) 
             <Alert
               key={r.mutationId}
               severity="error"
-              action={<Button color="inherit" size="small" onClick={() => void dismissRejected(db, r.mutationId)}>Dismiss</Button>}
+              action={(
+                <Stack>
+                  <Button color="inherit" size="small" onClick={() => void sendAgain(r)}>Send again</Button>
+                  <Button color="inherit" size="small" onClick={() => void dismissRejected(db, r.mutationId)}>Dismiss</Button>
+                </Stack>
+              )}
             >
               {rejectedTitle(r)} {r.error.message}
+              {resendErrors[r.mutationId] && <Typography variant="body2" sx={{ mt: 1 }}>{resendErrors[r.mutationId]}</Typography>}
             </Alert>
           ))}
           {s.refusedPhotos.map((p) => (

@@ -86,6 +86,25 @@ describe('sync status', () => {
     await waitFor(() => expect(screen.queryByText(/was not saved/)).toBeNull());
   });
 
+  it('sends a refused change again on request, once the server takes it', async () => {
+    const { backend, runner, writer } = setUp();
+    const id = await createRecord(writer, 'defect', defectFields({ reportedBy: writer.userId }));
+    await runner.requestSync();
+    backend.grant('access-1', { userId: 'u-1', role: 'crew', clubId: 'c-1' }); // role lowered on the server
+    await updateRecord(writer, 'defect', id, { status: 'repaired' });
+    render(<SyncStatus runner={runner} />);
+    await act(() => runner.idle());
+    const user = userEvent.setup();
+    await user.click(await screen.findByRole('button', { name: /^Sync:/ }));
+    const refused = await screen.findByText(/Your change to a defect \(status\) was not saved/);
+    backend.grant('access-1', { userId: 'u-1', role: 'driver', clubId: 'c-1' }); // an admin puts it right
+    await user.click(within(refused.closest('[role="alert"]') as HTMLElement).getByRole('button', { name: 'Send again' }));
+    await waitFor(() => expect(screen.queryByText(/was not saved/)).toBeNull());
+    // Queued again, the change goes out with the sync the button asked for.
+    await waitFor(() => expect(backend.server.records('c-1').find((r) => r.id === id)?.fields.status).toBe('repaired'));
+    await act(() => runner.idle());
+  });
+
   it('shows a refused photo with the reason, and sends it when the person tries again', async () => {
     const { backend, runner, writer } = setUp();
     // Starts like a JPEG (FF D8 FF E0); bigger than the limit set below.

@@ -18,7 +18,7 @@ const CODES: Record<number, string> = { 400: 'validation_failed', 403: 'forbidde
 
 const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
 
-async function readBody(init: RequestInit): Promise<unknown> {
+export async function readBody(init: RequestInit): Promise<unknown> {
   const headers = new Headers(init.headers);
   if (headers.get('Content-Encoding') === 'gzip') {
     const stream = new Response(init.body as BodyInit).body!.pipeThrough(new DecompressionStream('gzip'));
@@ -54,7 +54,7 @@ export class FakeBackend {
    */
   pullHeaderCheckpoint?: (checkpoint: string) => string | null;
   /** Other routes (e.g. the auth refresh) answered as given. */
-  readonly routes: Record<string, () => Response> = {};
+  readonly routes: Record<string, (init: RequestInit) => Response | Promise<Response>> = {};
   private readonly tokens = new Map<string, AuthContext>();
 
   grant(token: string, auth: AuthContext): void {
@@ -71,7 +71,7 @@ export class FakeBackend {
     this.requests.push(seen);
     if (this.offline) throw new TypeError('Failed to fetch');
     const route = this.routes[`${method} ${url.pathname}`];
-    if (route) return route();
+    if (route) return route(init);
     const token = new Headers(init.headers).get('Authorization')?.replace(/^Bearer /, '') ?? '';
     const auth = this.tokens.get(token);
     if (!auth) return json(401, { statusCode: 401, code: 'unauthorized', message: 'Sign in again.' });
