@@ -13,10 +13,12 @@ describe('alerts by e-mail', () => {
   let crew: Session;
   let captain: Session;
   let petrel: string;
-  const phone = new TestDevice();
+  // One phone a member, as on the beach: a device is its first pusher's.
+  const phones = new Map<string, TestDevice>();
+  const phoneOf = (s: { accessToken: string }) => phones.get(s.accessToken) ?? phones.set(s.accessToken, new TestDevice()).get(s.accessToken)!;
   const auth = (s: Session) => ({ authorization: `Bearer ${s.accessToken}` });
   const push = async (s: Session, kind: Parameters<TestDevice['mutation']>[0], id: string, patch: Record<string, unknown>, opts = {}) => {
-    const res = await t.http().post('/api/sync/push').set(auth(s)).send(phone.body([phone.mutation(kind, id, patch, opts)])).expect(200);
+    const res = await t.http().post('/api/sync/push').set(auth(s)).send(phoneOf(s).body([phoneOf(s).mutation(kind, id, patch, opts)])).expect(200);
     expect(res.body.results[0].status).toMatch(/applied|merged/);
   };
   const about = (text: string) => (m: CaughtMail) => m.text.includes(text);

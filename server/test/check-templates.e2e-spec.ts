@@ -8,9 +8,11 @@ describe('check template versions on the server', () => {
   let admin: string;
   let captain: string;
   let launch: { id: string; version: number; fields: Record<string, unknown> };
-  const phone = new TestDevice();
+  // One phone a member: a device is its first pusher's.
+  const phones = new Map<string, TestDevice>();
+  const phoneOf = (token: string) => phones.get(token) ?? phones.set(token, new TestDevice()).get(token)!;
   const push = (token: string, kind: 'checkTemplate' | 'motorMove', id: string, patch: Record<string, unknown>, opts = {}) =>
-    t.http().post('/api/sync/push').set('authorization', `Bearer ${token}`).send(phone.body([phone.mutation(kind, id, patch, opts)])).expect(200)
+    t.http().post('/api/sync/push').set('authorization', `Bearer ${token}`).send(phoneOf(token).body([phoneOf(token).mutation(kind, id, patch, opts)])).expect(200)
       .then((res) => res.body.results[0] as { status: string; error?: { message: string } });
 
   beforeAll(async () => {

@@ -14,10 +14,12 @@ describe('the Review desk tables, their CSV and record history', () => {
   let boats: { id: string; name: string }[];
   let templateId: string;
   const auth = (s: Session) => ({ authorization: `Bearer ${s.accessToken}` });
-  const phone = new TestDevice();
+  // One phone a member, as on the beach: a device is its first pusher's.
+  const phones = new Map<string, TestDevice>();
+  const phoneOf = (s: { accessToken: string }) => phones.get(s.accessToken) ?? phones.set(s.accessToken, new TestDevice()).get(s.accessToken)!;
 
   const push = async (s: Session, kind: Parameters<TestDevice['mutation']>[0], id: string, patch: Record<string, unknown>, opts = {}) => {
-    const res = await t.http().post('/api/sync/push').set(auth(s)).send(phone.body([phone.mutation(kind, id, patch, opts)])).expect(200);
+    const res = await t.http().post('/api/sync/push').set(auth(s)).send(phoneOf(s).body([phoneOf(s).mutation(kind, id, patch, opts)])).expect(200);
     expect(res.body.results[0].status).toMatch(/applied|merged/);
     return res.body.results[0];
   };
@@ -188,12 +190,13 @@ describe('the Review desk tables, their CSV and record history', () => {
     const id = uuid();
     const a = new TestDevice('phone-shed');
     const b = new TestDevice('desk-office');
+    const c = new TestDevice('phone-beach');
     const fields = defectFields(boats[1]!.id, crew.user.id);
     await t.http().post('/api/sync/push').set(auth(crew)).send(a.body([a.mutation('defect', id, fields)])).expect(200);
     await t.http().post('/api/sync/push').set(auth(captain))
       .send(b.body([b.mutation('defect', id, { status: 'assigned', assignedTo: driver.user.id }, { baseVersion: 1, base: { status: 'open', assignedTo: null } })])).expect(200);
     await t.http().post('/api/sync/push').set(auth(driver))
-      .send(a.body([a.mutation('defect', id, { status: 'repaired', actionTaken: 'New strap stitched on', repairedAt: '2026-11-29T02:00:00Z' },
+      .send(c.body([c.mutation('defect', id, { status: 'repaired', actionTaken: 'New strap stitched on', repairedAt: '2026-11-29T02:00:00Z' },
         { baseVersion: 2, base: { status: 'assigned', actionTaken: null, repairedAt: null } })])).expect(200);
 
     const res = await get(captain, `/api/records/defect/${id}/history`).expect(200);
@@ -206,6 +209,7 @@ describe('the Review desk tables, their CSV and record history', () => {
       status: { from: 'open', to: 'assigned', label: 'status' },
       assignedTo: { from: null, to: driver.user.id, label: 'assigned to' },
     });
+    expect(v[2]).toMatchObject({ deviceId: 'phone-beach' });
     expect(Object.keys(v[2].changes).sort()).toEqual(['actionTaken', 'repairedAt', 'status']);
     expect(v[2].changes.status).toEqual({ from: 'assigned', to: 'repaired', label: 'status' });
     expect(new Date(v[2].at).getTime()).toBeGreaterThanOrEqual(new Date(v[0].at).getTime());

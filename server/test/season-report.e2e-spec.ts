@@ -19,10 +19,12 @@ describe('the Season report', () => {
   let driver: Session;
   let captain: Session;
   let boats: Record<string, string>;
-  const phone = new TestDevice();
+  // One phone a member, as on the beach: a device is its first pusher's.
+  const phones = new Map<string, TestDevice>();
+  const phoneOf = (s: { accessToken: string }) => phones.get(s.accessToken) ?? phones.set(s.accessToken, new TestDevice()).get(s.accessToken)!;
   const auth = (s: Session) => ({ authorization: `Bearer ${s.accessToken}` });
   const push = async (s: Session, kind: Parameters<TestDevice['mutation']>[0], fields: Record<string, unknown>) => {
-    const res = await t.http().post('/api/sync/push').set(auth(s)).send(phone.body([phone.mutation(kind, uuid(), fields)])).expect(200);
+    const res = await t.http().post('/api/sync/push').set(auth(s)).send(phoneOf(s).body([phoneOf(s).mutation(kind, uuid(), fields)])).expect(200);
     expect(res.body.results[0].status).toBe('applied');
   };
   const trip = (boat: string, purpose: string, launchedAt: string, retrievedAt: string | null) => ({

@@ -51,6 +51,27 @@ describe('sync refusals', () => {
     expect(again.body.lastSeq).toBe(first.body.lastSeq);
   });
 
+  it('keeps a device to the member who first pushed from it, and the server\'s own device names to the server', async () => {
+    const captain = (await login(t, 'captain@gannetbay.example')) as typeof crew;
+    const phone = new TestDevice();
+    const mine = await push(crew.accessToken, phone.body([phone.mutation('defect', uuid(), defectFields(boatId, crew.user.id))])).expect(200);
+    // Another member sends under the crew member's id, with a seq far ahead of hers.
+    const forged = phone.mutation('defect', uuid(), defectFields(boatId, captain.user.id), { seq: 2_000_000_000 });
+    const refused = await push(captain.accessToken, phone.body([forged])).expect(403);
+    expect(refused.body.message).toBe("This phone's sync id is already used by another member, so its changes were not taken. They stay on this phone; tell your club admin.");
+    // Her next change is taken, not answered as already sent.
+    const after = phone.mutation('defect', uuid(), defectFields(boatId, crew.user.id));
+    const next = await push(crew.accessToken, phone.body([after])).expect(200);
+    expect(next.body.results[0]).toMatchObject({ status: 'applied' });
+    expect(next.body.lastSeq).toBe(after.seq);
+    expect(after.seq).toBeGreaterThan(mine.body.lastSeq);
+    for (const name of ['member-cards', 'demo-seed']) {
+      const server = new TestDevice(name);
+      const res = await push(crew.accessToken, server.body([server.mutation('defect', uuid(), defectFields(boatId, crew.user.id))])).expect(400);
+      expect(res.body.message).toBe(`The device name "${name}" is kept for the server's own changes; a phone sends under its own id.`);
+    }
+  });
+
   it('goes on taking every club\'s changes after one stamped ahead with a full clock counter', async () => {
     // Four minutes ahead is inside the drift the server allows; the counter is one below its top,
     // so the server's clock would overflow on the next change it received.

@@ -35,7 +35,8 @@ describe('sync push and pull', () => {
     expect(res.body.results[0]).toMatchObject({ status: 'applied', version: 2 });
     const after = await pullAll(crew.accessToken);
     expect(after.changes.find((c) => c.id === id)).toMatchObject({ version: 2, deleted: false, fields: { description: 'Port handle strap torn' } });
-    res = await push(captain.accessToken, phone.body([phone.mutation('defect', id, {}, { deleted: true, baseVersion: 2, base: { ...fields, description: 'Port handle strap torn' } })])).expect(200);
+    const desk = new TestDevice();
+    res = await push(captain.accessToken, desk.body([desk.mutation('defect', id, {}, { deleted: true, baseVersion: 2, base: { ...fields, description: 'Port handle strap torn' } })])).expect(200);
     expect(res.body.results[0]).toMatchObject({ status: 'applied', version: 3 });
     const gone = await pullAll(crew.accessToken, after.checkpoint);
     expect(gone.changes).toEqual([expect.objectContaining({ id, deleted: true, version: 3 })]);
@@ -119,7 +120,8 @@ describe('sync push and pull', () => {
     const phone = new TestDevice();
     const forged = await push(crew.accessToken, phone.body([phone.mutation('defect', uuid(), defectFields(boatId, captain.user.id))])).expect(200);
     expect(forged.body.results[0]).toMatchObject({ status: 'rejected', error: { code: 'forbidden', message: 'You may only enter a defect in your own name (reported by); a supervisor may enter one for someone else.' } });
-    const entered = await push(captain.accessToken, phone.body([phone.mutation('defect', uuid(), defectFields(boatId, crew.user.id))])).expect(200);
+    const desk = new TestDevice();
+    const entered = await push(captain.accessToken, desk.body([desk.mutation('defect', uuid(), defectFields(boatId, crew.user.id))])).expect(200);
     expect(entered.body.results[0]).toMatchObject({ status: 'applied' });
   });
 

@@ -4,11 +4,11 @@ import { encodeHlc, PROTOCOL_VERSION, type KindFields, type MemberAward, type Mu
 import { AppError } from '../common/app-error.js';
 import type { Principal } from '../auth/principal.js';
 import { recordStore } from '../records/record-store.js';
-import { PushService } from '../sync/push.service.js';
+import { MEMBER_CARDS_DEVICE, PushService } from '../sync/push.service.js';
 import { Membership } from './membership.entity.js';
 
 /** The server's own device for member cards; its seq counts on from what the club has accepted. */
-export const MEMBER_CARDS_DEVICE = 'member-cards';
+export { MEMBER_CARDS_DEVICE };
 const ATTEMPTS = 3;
 
 export interface MemberCardOptions {
@@ -61,7 +61,7 @@ export class MemberCardsService {
       patch: fields ? { displayName } : { memberId: membership.userId, displayName, awards: options.awards ?? [] },
     };
     const principal: Principal = { userId: options.byUserId ?? membership.userId, clubId: membership.clubId, role: 'admin', membershipId };
-    const res = await this.pushes.push(principal, { protocolVersion: PROTOCOL_VERSION, deviceId: MEMBER_CARDS_DEVICE, mutations: [mutation] });
+    const res = await this.pushes.push(principal, { protocolVersion: PROTOCOL_VERSION, deviceId: MEMBER_CARDS_DEVICE, mutations: [mutation] }, { serverDevice: true });
     const [r] = res.results;
     if (!r || r.status === 'duplicate') return null;
     if (r.status === 'rejected') {

@@ -4,7 +4,7 @@ import type { DataSource } from 'typeorm';
 import {
   DEFAULT_LAUNCH_TEMPLATE, DEFAULT_STOW_TEMPLATE, encodeHlc, PROTOCOL_VERSION, type KindFields, type Mutation, type RecordKind, type Role,
 } from '@breakline/sync-protocol';
-import { PushService } from '../sync/push.service.js';
+import { DEMO_DEVICE as DEVICE, PushService } from '../sync/push.service.js';
 import { BOATS, motorMoves, motors } from './demo-fleet.js';
 import { demoId } from './demo-ids.js';
 import { demoChecks, demoDefects } from './demo-history.js';
@@ -13,7 +13,6 @@ import { DEMO_CLUBS } from './demo-scenario.js';
 
 export interface DemoPeople { admin: string; captain: string; driver: string; crew: string }
 
-const DEVICE = 'demo-seed';
 const GANNET_BAY = DEMO_CLUBS.find((c) => c.slug === 'gannet-bay')!;
 
 export async function seedDemoRecords(db: DataSource, clubId: string, people: DemoPeople, now = new Date()) {
@@ -35,7 +34,7 @@ export async function seedDemoRecords(db: DataSource, clubId: string, people: De
     hlc: encodeHlc({ l: now.getTime(), c: c++, node: DEVICE }), patch,
   }));
   const principal = { userId: people.admin, clubId, role: 'admin' as Role, membershipId: '' };
-  const res = await new PushService(db).push(principal, { protocolVersion: PROTOCOL_VERSION, deviceId: DEVICE, mutations });
+  const res = await new PushService(db).push(principal, { protocolVersion: PROTOCOL_VERSION, deviceId: DEVICE, mutations }, { serverDevice: true });
   const refused = res.results.filter((r) => r.status === 'rejected');
   if (refused.length) throw new Error(`The demo records did not pass the sync rules: ${JSON.stringify(refused[0])}`);
   return res.results.filter((r) => r.status !== 'duplicate').length;

@@ -12,6 +12,10 @@ export class SyncDevice {
   @Column({ name: 'last_seq', type: 'int', default: 0 })
   lastSeq: number;
 
+  /** The member whose phone this is, from its first push; null for the server's own devices. */
+  @Column({ name: 'user_id', type: 'uuid', nullable: true })
+  userId: string | null;
+
   @Column({ name: 'last_user_id', type: 'uuid', nullable: true })
   lastUserId: string | null;
 

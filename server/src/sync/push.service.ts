@@ -11,6 +11,15 @@ import { insertConflicts, insertRefusals, loadRefusals, writeChanges, type Chang
 import { deviceSeqPart, lockClubAndDevice, saveDeviceSeq } from './club-lock.js';
 import { assertProtocol } from './sync-errors.js';
 
+/** The server's own devices: member cards made on joining, and the demo's records. */
+export const MEMBER_CARDS_DEVICE = 'member-cards';
+export const DEMO_DEVICE = 'demo-seed';
+/** Written by several people each, so no phone may push under their names. */
+export const SERVER_DEVICES: ReadonlySet<string> = new Set([MEMBER_CARDS_DEVICE, DEMO_DEVICE]);
+
+/** How a push comes in: from a phone over HTTP, or from the server's own work on one of SERVER_DEVICES. */
+export interface PushOrigin { serverDevice?: boolean }
+
 const NOT_FOUND = 'This record is not on the server, so the change could not be saved.';
 const takenId = (kind: RecordKind) =>
   `This record's id is already taken by ${kindSpec(kind).label}, so it was not saved; make it again as a new record.`;
@@ -27,7 +36,7 @@ export class PushService {
 
   constructor(private readonly db: DataSource) {}
 
-  async push(p: Principal, body: unknown): Promise<PushResponse> {
+  async push(p: Principal, body: unknown, { serverDevice = false }: PushOrigin = {}): Promise<PushResponse> {
     assertProtocol(body);
     const parsed = parsePushRequest(body);
     if (!parsed.success) {
@@ -35,12 +44,21 @@ export class PushService {
       throw new AppError(400, 'validation_failed', 'The push is not in the sync format.', details);
     }
     const { deviceId, mutations } = parsed.data;
-    return this.db.transaction((em) => this.pushInTransaction(em, p, deviceId, mutations));
+    if (SERVER_DEVICES.has(deviceId) !== serverDevice) {
+      throw new AppError(400, 'validation_failed', `The device name "${deviceId}" is kept for the server's own changes; a phone sends under its own id.`);
+    }
+    return this.db.transaction((em) => this.pushInTransaction(em, p, deviceId, mutations, serverDevice));
   }
 
-  private async pushInTransaction(em: EntityManager, p: Principal, deviceId: string, mutations: Mutation[]): Promise<PushResponse> {
+  private async pushInTransaction(em: EntityManager, p: Principal, deviceId: string, mutations: Mutation[], serverDevice: boolean): Promise<PushResponse> {
     const locked = await lockClubAndDevice(em, p.clubId, deviceId);
     const { deviceSeq } = locked;
+    // A phone's changes count by its own seq, so another member sending under its id could make
+    // them read as already sent. A device belongs to the member who first pushed from it.
+    if (!serverDevice && locked.ownerId !== null && locked.ownerId !== p.userId) {
+      throw new AppError(403, 'forbidden', "This phone's sync id is already used by another member, so its changes were not taken. They stay on this phone; tell your club admin.");
+    }
+    const owner = serverDevice ? null : p.userId;
     // Duplicates are loaded too, so their answer carries the record's current version.
     const { records, foreign, otherKind } = await this.loadTouched(em, p.clubId, mutations);
     const club: ClubState = { records, changeSeq: locked.lastSeq, deviceSeq: { [deviceId]: deviceSeq }, conflicts: [], purgedThrough: locked.purgedThroughSeq };
@@ -91,10 +109,10 @@ export class PushService {
     // Each trip to the database waits its turn for the processor on a busy machine: the device's
     // seq goes with the changes when there are any.
     if (changes.length) {
-      await this.write(em, p.clubId, club, locked.lastSeq, changes, [(params) => deviceSeqPart(params, deviceId, lastSeq, p.userId)]);
+      await this.write(em, p.clubId, club, locked.lastSeq, changes, [(params) => deviceSeqPart(params, deviceId, lastSeq, p.userId, owner)]);
     } else {
       await this.write(em, p.clubId, club, locked.lastSeq, changes);
-      await saveDeviceSeq(em, p.clubId, deviceId, lastSeq, p.userId);
+      await saveDeviceSeq(em, p.clubId, deviceId, lastSeq, p.userId, owner);
     }
     return { results, lastSeq };
   }
