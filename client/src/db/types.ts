@@ -88,6 +88,11 @@ export interface ClubSyncRow {
   lastError?: SyncFailure | null;
   /** Conflicts waiting for a supervisor in the club, as the server last said. */
   openConflicts?: number;
+  /**
+   * What the role this copy was pulled under may see (viewOf in sync/pull.ts). Pulls send only
+   * what the role sees and move the checkpoint past the rest, so a new role starts afresh.
+   */
+  view?: string;
 }
 
 export type SyncStateRow = ReplicaRow | ClubSyncRow;

@@ -1,4 +1,4 @@
-import { PULL_CHECKPOINT_HEADER, PULL_HAS_MORE_HEADER, type PullResponse } from '@breakline/sync-protocol';
+import { kindRules, PULL_CHECKPOINT_HEADER, PULL_HAS_MORE_HEADER, RECORD_KINDS, roleAtLeast, type PullResponse, type Role } from '@breakline/sync-protocol';
 import { clubRows } from '@/db/queries';
 import { loadClubState, updateClubState } from '@/db/replica-state';
 import type { ReplicaDb } from '@/db/schema';
@@ -30,12 +30,34 @@ function isPullResponse(value: unknown): value is PullResponse {
  * the last page lands, rows the new pull did not bring (and no queued edit holds) are swept.
  * Clearing first would show empty lists for the length of a full sync.
  */
-async function startReset(db: ReplicaDb, clubId: string): Promise<void> {
+async function startReset(db: ReplicaDb, clubId: string, view?: string): Promise<void> {
   await db.transaction('rw', db.syncState, async () => {
     const state = await loadClubState(db, clubId);
     const gen = state.gen + 1;
-    await updateClubState(db, clubId, { gen, sweepBelow: gen, checkpoint: undefined });
+    await updateClubState(db, clubId, { gen, sweepBelow: gen, checkpoint: undefined, ...(view === undefined ? {} : { view }) });
   });
+}
+
+/**
+ * What a role sees of the club, as one string: the kinds it sees whole. Kinds it does not (other
+ * members' incident notes below driver) come only as far as the person's own records.
+ */
+export function viewOf(role: Role): string {
+  return RECORD_KINDS.filter((k) => roleAtLeast(role, kindRules(k).access.see ?? 'crew')).join(',');
+}
+
+/**
+ * A copy pulled under a role that saw other records starts afresh: pulls move the checkpoint past
+ * what the role could not see, so a promoted member would never get those records, and a member
+ * whose role was lowered would keep what they may no longer see (the reset's sweep removes it).
+ */
+async function matchView(db: ReplicaDb, clubId: string, role: Role): Promise<void> {
+  const view = viewOf(role);
+  const state = await loadClubState(db, clubId);
+  if (state.view === view) return;
+  // A copy from before views were kept, or none yet: it is taken to be this role's.
+  if (state.view === undefined || state.checkpoint === undefined) await updateClubState(db, clubId, { view });
+  else await startReset(db, clubId, view);
 }
 
 interface Asked {
@@ -75,6 +97,7 @@ export async function pullAll(ctx: PullContext): Promise<void> {
     page.catch(() => undefined);
     return { counted: count, head, page };
   };
+  await matchView(db, scope.clubId, scope.role);
   const start = await loadClubState(db, scope.clubId);
   let since = start.checkpoint;
   // A first sync: no checkpoint and nothing of the club here yet (see applyPullPage).

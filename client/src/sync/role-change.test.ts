@@ -1,0 +1,45 @@
+import { describe, expect, it } from 'vitest';
+import { listRecords } from '@/db/queries';
+import { createRecord } from '@/db/write';
+import { incidentFields } from '@/features/patrol/testing/records';
+import { FakeBackend } from './test/fake-backend';
+import { testDevice, type TestDevice } from './test/device';
+import { viewOf } from './pull';
+
+/** The server lets `device` act as `role` from now on, as after an admin changed it. */
+async function setRole(backend: FakeBackend, device: TestDevice, role: 'crew' | 'driver'): Promise<void> {
+  backend.grant((await device.auth.token(device.scope))!, { userId: device.scope.userId, role, clubId: device.scope.clubId });
+  device.scope.role = role;
+  device.writer.role = role;
+}
+
+const notesOn = async (device: TestDevice) => (await listRecords(device.db, device.scope.clubId, 'incidentNote')).map((r) => r.fields.authorId).sort();
+
+describe('a member whose role changes', () => {
+  it('sees by role: crew see all but other members\' incident notes', () => {
+    expect(viewOf('crew').split(',')).not.toContain('incidentNote');
+    expect(viewOf('driver').split(',')).toContain('incidentNote');
+    expect(viewOf('supervisor')).toBe(viewOf('admin'));
+  });
+
+  it('gets the incident notes a driver sees once promoted, and loses them again when the role is lowered', async () => {
+    const backend = new FakeBackend();
+    const ben = testDevice(backend, 'member-ben', 'driver');
+    await createRecord(ben.writer, 'incidentNote', incidentFields({ authorId: 'member-ben' }));
+    await ben.sync();
+    const ana = testDevice(backend, 'member-ana', 'crew');
+    await createRecord(ana.writer, 'incidentNote', incidentFields({ authorId: 'member-ana', actionTaken: 'Her own note' }));
+    expect(await ana.sync()).toEqual({ ok: true });
+    expect(await notesOn(ana)).toEqual(['member-ana']);
+
+    await setRole(backend, ana, 'driver');
+    expect(await ana.sync()).toEqual({ ok: true });
+    expect(await notesOn(ana)).toEqual(['member-ana', 'member-ben']);
+
+    await setRole(backend, ana, 'crew');
+    expect(await ana.sync()).toEqual({ ok: true });
+    // The note she wrote stays; the one she may no longer see is gone from the phone.
+    expect(await notesOn(ana)).toEqual(['member-ana']);
+    expect((await ana.db.records.toArray()).filter((r) => r.kind === 'incidentNote').map((r) => r.fields.authorId)).toEqual(['member-ana']);
+  });
+});
