@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { rejectedTitle } from './rejected-title';
-import { headline, lastSyncText, photosWaitingText, progressText, relativeTime, waitingText } from './status-text';
+import { elsewhereText, headline, lastSyncText, photosWaitingText, progressText, relativeTime, waitingText } from './status-text';
 import type { SyncStatus } from './status';
 
 const NOW = Date.parse('2026-12-06T09:00:00Z');
 const idle: SyncStatus = {
   waiting: 0, lastSyncAt: null, lastError: null, openConflicts: 0, rejected: [], raisedConflicts: [],
-  photosWaiting: 0, refusedPhotos: [], running: false, progress: null, storage: 'persisted',
+  photosWaiting: 0, refusedPhotos: [], waitingElsewhere: [], running: false, progress: null, storage: 'persisted',
 };
 
 describe('sync status words', () => {
@@ -26,6 +26,15 @@ describe('sync status words', () => {
     expect(progressText({ running: true, progress: { phase: 'receiving', done: 2000, more: true, total: 20000 } })).toBe('Receiving changes: 2,000 of about 20,000');
     expect(progressText({ running: false, progress: null })).toBeNull();
     expect(lastSyncText(null, NOW)).toBe('Not synced yet on this phone');
+  });
+
+  it('says when changes wait for another of the person\'s clubs, and how to send them', () => {
+    expect(elsewhereText(1, 'Kelp Reef Surf Lifesaving Club')).toBe('1 change for Kelp Reef Surf Lifesaving Club waits on this phone: switch to that club to send it.');
+    expect(elsewhereText(3, undefined)).toBe('3 changes for another club wait on this phone: switch to that club to send them.');
+    const elsewhere = { ...idle, lastSyncAt: '2026-12-06T08:59:30Z', waitingElsewhere: [{ clubId: 'c-2', count: 3 }] };
+    expect(headline(elsewhere, NOW)).toBe('Changes waiting for another club');
+    // This club's own queue comes first.
+    expect(headline({ ...elsewhere, waiting: 2 }, NOW)).toBe('2 changes waiting to be sent');
   });
 
   it('counts photos waiting and shows their upload as n of m', () => {

@@ -50,6 +50,11 @@ export function progressText(s: Pick<SyncStatus, 'running' | 'progress'>): strin
   return `Receiving changes: ${p.done.toLocaleString('en')}${p.more ? ' so far' : ''}`;
 }
 
+/** Changes queued for another of the person's clubs, which go only while that club is chosen. */
+export function elsewhereText(count: number, clubName: string | undefined): string {
+  return `${plural(count, 'change')} for ${clubName ?? 'another club'} ${count === 1 ? 'waits' : 'wait'} on this phone: switch to that club to send ${count === 1 ? 'it' : 'them'}.`;
+}
+
 export function conflictsText(open: number): string | null {
   return open === 0 ? null : `${plural(open, 'conflict')} waiting for a supervisor`;
 }
@@ -60,6 +65,7 @@ export function headline(s: SyncStatus, now: number): string {
     progressText(s) ??
     (s.lastError ? FAILURE_HEADLINE[s.lastError.reason] : null) ??
     (s.waiting > 0 ? waitingText(s.waiting) : null) ??
+    (s.waitingElsewhere.length > 0 ? 'Changes waiting for another club' : null) ??
     photosWaitingText(s.photosWaiting) ??
     lastSyncText(s.lastSyncAt, now)
   );

@@ -18,6 +18,8 @@ export interface StoredSyncStatus {
   photosWaiting: number;
   /** Photos the server refused, kept on this phone with its reason. */
   refusedPhotos: RefusedPhoto[];
+  /** Changes queued in the person's other clubs, by club: sent only while that club is the active one. */
+  waitingElsewhere: { clubId: string; count: number }[];
 }
 
 export interface RefusedPhoto {
@@ -31,7 +33,7 @@ export interface RefusedPhoto {
  */
 export function readSyncStatus(db: ReplicaDb, clubId: string): Promise<StoredSyncStatus> {
   return db.transaction('r', [db.syncState, db.outbox, db.rejected, db.conflictsSeen, db.photos], async () => {
-    const [state, waiting, rejected, raisedConflicts, photosWaiting, refused] = await Promise.all([
+    const [state, waiting, rejected, raisedConflicts, photosWaiting, refused, elsewhere] = await Promise.all([
       loadClubState(db, clubId),
       db.outbox.where('[clubId+status]').equals([clubId, 'pending']).count(),
       db.rejected.where('clubId').equals(clubId).sortBy('at'),
@@ -39,7 +41,11 @@ export function readSyncStatus(db: ReplicaDb, clubId: string): Promise<StoredSyn
       countPhotosIn(db, clubId, 'due'),
       // Refused photos are rare, so reading their rows (bytes and all) for the reason costs little.
       db.photos.where('[clubId+state]').equals([clubId, 'refused']).toArray(),
+      // The queue is a few hundred changes at most, so reading it through for other clubs' costs little.
+      db.outbox.filter((e) => e.status === 'pending' && e.clubId !== clubId).toArray(),
     ]);
+    const counts = new Map<string, number>();
+    for (const e of elsewhere) counts.set(e.clubId, (counts.get(e.clubId) ?? 0) + 1);
     return {
       waiting,
       lastSyncAt: state.lastSyncAt ?? null,
@@ -49,6 +55,7 @@ export function readSyncStatus(db: ReplicaDb, clubId: string): Promise<StoredSyn
       raisedConflicts,
       photosWaiting,
       refusedPhotos: refused.map((p) => ({ sha256: p.sha256, problem: p.problem ?? 'The server did not take this photo.' })),
+      waitingElsewhere: [...counts].map(([id, count]) => ({ clubId: id, count })),
     };
   });
 }

@@ -16,7 +16,8 @@ import { STORAGE_NOT_PERSISTED } from '../persist';
 import type { SyncRunner } from '../runner';
 import { dismissRejected, retryPhoto, type SyncStatus as Status } from '../status';
 import { rejectedTitle } from '../rejected-title';
-import { conflictsText, lastSyncText, photosWaitingText, progressText, waitingText } from '../status-text';
+import { useSession } from '@/features/auth/use-auth';
+import { conflictsText, elsewhereText, lastSyncText, photosWaitingText, progressText, waitingText } from '../status-text';
 
 interface Props {
   open: boolean;
@@ -30,6 +31,7 @@ interface Props {
 /** The sync details behind the top bar's status: what waits, when it last synced, what went wrong. */
 export function SyncDetailsDialog({ open, onClose, s, now, db, runner }: Props) {
   const ctx = useReplica();
+  const { memberships } = useSession();
   /** Why a refused change could not be queued again, by its mutation id. */
   const [resendErrors, setResendErrors] = useState<Record<string, string>>({});
   const sendAgain = async (r: RejectedRow) => {
@@ -51,6 +53,9 @@ export function SyncDetailsDialog({ open, onClose, s, now, db, runner }: Props) 
         <Stack spacing={1.5}>
           <Typography>{waitingText(s.waiting)}</Typography>
           {photos && <Typography>{photos}</Typography>}
+          {s.waitingElsewhere.map((w) => (
+            <Alert key={w.clubId} severity="warning">{elsewhereText(w.count, memberships.find((m) => m.clubId === w.clubId)?.clubName)}</Alert>
+          ))}
           <Typography>{lastSyncText(s.lastSyncAt, now)}</Typography>
           {progressText(s) && <Typography role="status">{progressText(s)}</Typography>}
           {s.lastError && <Alert severity={s.lastError.reason === 'offline' ? 'info' : 'warning'}>{s.lastError.message}</Alert>}
