@@ -8,6 +8,7 @@ import { sessionAnswer } from '@/test/fixtures';
 import { sessionAuth } from './auth-source';
 import { syncOnce } from './engine';
 import { FakeBackend, readBody } from './test/fake-backend';
+import { TOO_LARGE_ALONE } from './push';
 import { defectFields, testDevice } from './test/device';
 
 describe('sync failures', () => {
@@ -130,5 +131,22 @@ describe('sync failures', () => {
     expect(await ana.db.rejected.count()).toBe(0);
     expect(backend.server.records(ana.scope.clubId).map((r) => r.id).sort()).toEqual([early, later].sort());
     expect(await getRecord(ana.db, ana.scope.clubId, 'defect', early)).toMatchObject({ fields: { description: 'Saved while the clock was an hour fast' } });
+  });
+
+  it('sends a queue the server finds too large in smaller batches, and sets aside a change too large alone', async () => {
+    const backend = new FakeBackend();
+    const ana = testDevice(backend);
+    for (let i = 0; i < 6; i++) await createRecord(ana.writer, 'defect', defectFields({ description: `Strap ${i} frayed` }));
+    const long = await createRecord(ana.writer, 'defect', defectFields({ description: 'Long report. '.repeat(150) }));
+    await createRecord(ana.writer, 'defect', defectFields({ description: 'Last strap frayed' }));
+    // About two ordinary changes fit in a push; the long report alone does not.
+    const one = JSON.stringify((await ana.db.outbox.toArray())[0]!.mutation).length;
+    backend.pushBodyLimit = one * 2 + 200;
+    expect(await ana.sync()).toEqual({ ok: true });
+    expect((await ana.db.outbox.toArray()).filter((e) => e.status === 'pending')).toEqual([]);
+    expect(backend.server.records(ana.scope.clubId).filter((r) => r.kind === 'defect')).toHaveLength(7);
+    const [set] = await ana.db.rejected.toArray();
+    expect(set).toMatchObject({ recordId: long, error: { message: TOO_LARGE_ALONE } });
+    expect(backend.requests.filter((r) => r.path === '/api/sync/push').map((r) => r.mutations).slice(0, 4)).toEqual([8, 4, 2, 2]);
   });
 });

@@ -36,6 +36,8 @@ export class FakeBackend {
   now = T0;
   readonly requests: SeenRequest[] = [];
   loseNextPushAnswer = false;
+  /** The largest push body taken, in characters of JSON, as a server's body limit; above it, 413. */
+  pushBodyLimit = Infinity;
   outdated = false;
   offline = false;
   inFlight = 0;
@@ -90,6 +92,9 @@ export class FakeBackend {
       if (method === 'POST' && url.pathname === '/api/sync/push') {
         const body = (await readBody(init)) as { protocolVersion: number; mutations: unknown[] };
         seen.mutations = body.mutations.length;
+        if (JSON.stringify(body).length > this.pushBodyLimit) {
+          return json(413, { statusCode: 413, code: 'payload_too_large', message: 'The push is larger than the server takes.' });
+        }
         const answer = this.server.push(auth, this.outdated ? { ...body, protocolVersion: 0 } : body, this.now);
         if (this.loseNextPushAnswer) {
           this.loseNextPushAnswer = false;
