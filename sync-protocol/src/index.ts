@@ -7,6 +7,7 @@ export * from './kinds.js';
 export * from './kind-rules.js';
 export * from './kinds/spec.js';
 export * from './kinds/values.js';
+export * from './kinds/see-rules.js';
 export type { NoteEntry } from './kinds/common.js';
 export * from './kinds/boat.js';
 export * from './kinds/boat-rules.js';

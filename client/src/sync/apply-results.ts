@@ -7,7 +7,7 @@ import { photoRefs } from './photo-refs';
 
 const LOST_REFUSAL = {
   code: 'invalid',
-  message: 'The server did not take this change on an earlier try, and its answer was lost on the way. What was entered is kept here: send it again, or enter it again.',
+  message: 'Not taken on an earlier try, and the answer saying why was lost on the way. Send it again, or enter it again.',
 } as const;
 
 function rejectedRow(entry: OutboxRow, r: MutationResult, at: string): RejectedRow {

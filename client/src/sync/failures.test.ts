@@ -112,7 +112,7 @@ describe('sync failures', () => {
     expect(await ana.db.outbox.count()).toBe(0);
     const [kept] = await ana.db.rejected.toArray();
     expect(kept).toMatchObject({ recordId: id, patch: defectFields() });
-    expect(kept!.error.message).toMatch(/answer was lost on the way/);
+    expect(kept!.error.message).toMatch(/answer saying why was lost on the way/);
   });
 
   it('sends again, once the phone\'s time is right, a change refused for a clock far ahead, and new changes are not refused', async () => {

@@ -1,4 +1,4 @@
-import { kindRules, PULL_CHECKPOINT_HEADER, PULL_HAS_MORE_HEADER, RECORD_KINDS, roleAtLeast, type PullResponse, type Role } from '@breakline/sync-protocol';
+import { PULL_CHECKPOINT_HEADER, PULL_HAS_MORE_HEADER, roleAtLeast, SEE_RULES, type PullResponse, type Role } from '@breakline/sync-protocol';
 import { clubRows } from '@/db/queries';
 import { loadClubState, updateClubState } from '@/db/replica-state';
 import type { ReplicaDb } from '@/db/schema';
@@ -39,11 +39,11 @@ async function startReset(db: ReplicaDb, clubId: string, view?: string): Promise
 }
 
 /**
- * What a role sees of the club, as one string: the kinds it sees whole. Kinds it does not (other
- * members' incident notes below driver) come only as far as the person's own records.
+ * What a role sees of the club, as one string: the kinds of SEE_RULES it sees whole. Of the
+ * others (other members' incident notes below driver) it gets only the person's own records.
  */
 export function viewOf(role: Role): string {
-  return RECORD_KINDS.filter((k) => roleAtLeast(role, kindRules(k).access.see ?? 'crew')).join(',');
+  return Object.entries(SEE_RULES).filter(([, least]) => roleAtLeast(role, least)).map(([kind]) => kind).sort().join(',');
 }
 
 /**

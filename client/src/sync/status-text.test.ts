@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { rejectedTitle } from './rejected-title';
-import { elsewhereText, headline, lastSyncText, photosWaitingText, progressText, relativeTime, waitingText } from './status-text';
+import { elsewhereText } from './components/elsewhere-text';
+import { headline, lastSyncText, photosWaitingText, progressText, relativeTime, waitingText } from './status-text';
 import type { SyncStatus } from './status';
 
 const NOW = Date.parse('2026-12-06T09:00:00Z');

@@ -15,7 +15,7 @@ const MINUTE = 60_000;
 const HOUR = 60 * MINUTE;
 const DAY = 24 * HOUR;
 
-const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+export const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
 
 /** "just now", "12 minutes ago", "3 hours ago", "2 days ago"; a time ahead of the phone's is "just now". */
 export function relativeTime(iso: string, now: number): string {
@@ -48,11 +48,6 @@ export function progressText(s: Pick<SyncStatus, 'running' | 'progress'>): strin
   if (p.phase === 'photos') return `Sending photos: ${p.done.toLocaleString('en')} of ${p.total.toLocaleString('en')}`;
   if (p.total !== undefined) return `Receiving changes: ${p.done.toLocaleString('en')} of about ${p.total.toLocaleString('en')}`;
   return `Receiving changes: ${p.done.toLocaleString('en')}${p.more ? ' so far' : ''}`;
-}
-
-/** Changes queued for another of the person's clubs, which go only while that club is chosen. */
-export function elsewhereText(count: number, clubName: string | undefined): string {
-  return `${plural(count, 'change')} for ${clubName ?? 'another club'} ${count === 1 ? 'waits' : 'wait'} on this phone: switch to that club to send ${count === 1 ? 'it' : 'them'}.`;
 }
 
 export function conflictsText(open: number): string | null {

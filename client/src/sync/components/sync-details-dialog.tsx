@@ -17,7 +17,8 @@ import type { SyncRunner } from '../runner';
 import { dismissRejected, retryPhoto, type SyncStatus as Status } from '../status';
 import { rejectedTitle } from '../rejected-title';
 import { useSession } from '@/features/auth/use-auth';
-import { conflictsText, elsewhereText, lastSyncText, photosWaitingText, progressText, waitingText } from '../status-text';
+import { conflictsText, lastSyncText, photosWaitingText, progressText, waitingText } from '../status-text';
+import { elsewhereText } from './elsewhere-text';
 
 interface Props {
   open: boolean;
