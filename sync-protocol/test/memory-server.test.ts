@@ -187,4 +187,21 @@ describe('memory sync server', () => {
     expect(s.record(CLUB, D1)).toMatchObject({ version: 3, fields: { description: 'B' } });
     expect(() => s.settle(sue, req, T0 + 11)).toThrow(expect.objectContaining({ httpStatus: 409 }));
   });
+
+  it('holds a settled value to the rules on who may write the field', () => {
+    // Two admins renamed one member card offline; only an admin may write a member's name.
+    const adam: AuthContext = { userId: 'member-adam', role: 'admin', clubId: CLUB };
+    const ada: AuthContext = { userId: 'member-ada', role: 'admin', clubId: CLUB };
+    const s = new MemorySyncServer();
+    const name = FIXTURES.member.displayName;
+    push(s, adam, 'desk-a', [mut('member', D1, 1, FIXTURES.member)]);
+    push(s, adam, 'desk-a', [mut('member', D1, 2, { displayName: 'Ben Arkwright-Hale' }, { baseVersion: 1, base: { displayName: name }, l: T0 + 5 })]);
+    push(s, ada, 'desk-b', [mut('member', D1, 1, { displayName: 'Benjamin Arkwright' }, { baseVersion: 1, base: { displayName: name }, l: T0 + 1, node: 'desk-b' })]);
+    const [c] = s.conflicts(CLUB);
+    const other = { protocolVersion: 1, conflictId: c!.id, choice: 'other' as const, value: 'B. Arkwright' };
+    expect(() => s.settle(sue, other, T0 + 10)).toThrow(expect.objectContaining({ httpStatus: 403 }));
+    expect(s.conflicts(CLUB)[0]).toMatchObject({ status: 'open' });
+    expect(s.settle(adam, other, T0 + 10)).toMatchObject({ status: 'settled', settledValue: 'B. Arkwright' });
+    expect(s.record(CLUB, D1)).toMatchObject({ fields: { displayName: 'B. Arkwright' } });
+  });
 });

@@ -1,5 +1,6 @@
 import { encodeHlc, maxEncodedHlc } from '../hlc.js';
 import type { HybridClock } from '../hybrid-clock.js';
+import { checkDelete, checkUpdate } from '../permissions.js';
 import { roleAtLeast } from '../roles.js';
 import { validateRecord, describeErrors } from '../validate.js';
 import { SettleRequestSchema } from '../wire-schemas.js';
@@ -41,6 +42,12 @@ export function settleConflict(ctx: SettleContext, body: SettleRequest): Conflic
     const next = withValue(record.fields, record.deleted, conflict.field, value);
     const check = validateRecord(record.kind, next.fields);
     if (!check.ok) throw new SyncRequestError(400, `That value cannot be saved: ${describeErrors(check.errors)}`);
+    // The settled value is a change like any other: the kind's rules on who may write it still hold.
+    const top = conflict.field.split('.')[0]!;
+    const allowed = conflict.field === 'deleted'
+      ? (next.deleted ? checkDelete(record.kind, auth.role, record.fields, auth.userId) : { ok: true as const })
+      : checkUpdate(record.kind, auth.role, { [top]: next.fields[top] }, record.fields, auth.userId);
+    if (!allowed.ok) throw new SyncRequestError(403, allowed.reason);
     const hlc = encodeHlc(ctx.clock.now(pt));
     const actor = { deviceId: 'server', userId: auth.userId, role: auth.role };
     club.changeSeq += 1;
