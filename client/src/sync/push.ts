@@ -51,6 +51,8 @@ export async function pushOutbox(ctx: PushContext): Promise<void> {
         continue;
       }
       // One change alone is over the limit: it would be refused on every try, and hold up the rest.
+      // The rest may well go in full batches again.
+      size = limit;
       answer = { results: [{ mutationId: batch[0]!.mutation.mutationId, status: 'rejected', error: { code: 'invalid', message: TOO_LARGE_ALONE } }], lastSeq: 0 };
     }
     if (!isPushResponse(answer)) throw new ApiError(200, 'bad_response', 'The server sent a push answer Breakline cannot read.');

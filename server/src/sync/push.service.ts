@@ -79,7 +79,7 @@ export class PushService {
       if (m.seq <= (club.deviceSeq[deviceId] ?? 0)) {
         const error = refusedBefore.get(m.mutationId);
         if (error) {
-          results.push({ mutationId: m.mutationId, status: 'rejected', error });
+          results.push({ mutationId: m.mutationId, status: 'rejected', error }); // kept already
           continue;
         }
         const rec = club.records[m.recordId];
