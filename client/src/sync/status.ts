@@ -74,6 +74,11 @@ export async function retryPhoto(db: ReplicaDb, sha256: string): Promise<void> {
   await retryRefusedPhoto(db, sha256);
 }
 
+/** The person has read which of their changes raised conflicts; the note goes. */
+export async function dismissRaised(db: ReplicaDb, clubId: string): Promise<void> {
+  await db.conflictsSeen.where('clubId').equals(clubId).delete();
+}
+
 /** The person has read a refused change; it leaves the list. */
 export async function dismissRejected(db: ReplicaDb, mutationId: string): Promise<void> {
   await db.rejected.delete(mutationId);

@@ -14,8 +14,8 @@ import { resendRejected } from '@/db/resend';
 import { isLocalWriteError } from '@/db/write-error';
 import { STORAGE_NOT_PERSISTED } from '../persist';
 import type { SyncRunner } from '../runner';
-import { dismissRejected, retryPhoto, type SyncStatus as Status } from '../status';
-import { rejectedTitle } from '../rejected-title';
+import { dismissRaised, dismissRejected, retryPhoto, type SyncStatus as Status } from '../status';
+import { raisedText, rejectedTitle } from '../rejected-title';
 import { useSession } from '@/features/auth/use-auth';
 import { conflictsText, lastSyncText, photosWaitingText, progressText, waitingText } from '../status-text';
 import { elsewhereText } from './elsewhere-text';
@@ -61,6 +61,14 @@ export function SyncDetailsDialog({ open, onClose, s, now, db, runner }: Props) 
           {progressText(s) && <Typography role="status">{progressText(s)}</Typography>}
           {s.lastError && <Alert severity={s.lastError.reason === 'offline' ? 'info' : 'warning'}>{s.lastError.message}</Alert>}
           {conflicts && <Alert severity="info">{conflicts}. Both values are kept until one is chosen at the Review desk.</Alert>}
+          {raisedText(s.raisedConflicts) && (
+            <Alert
+              severity="info"
+              action={<Button color="inherit" size="small" onClick={() => void dismissRaised(db, ctx.clubId)}>Dismiss</Button>}
+            >
+              {raisedText(s.raisedConflicts)}
+            </Alert>
+          )}
           {s.rejected.map((r) => (
             <Alert
               key={r.mutationId}

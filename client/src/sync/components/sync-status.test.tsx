@@ -82,8 +82,12 @@ describe('sync status', () => {
     await user.click(await screen.findByRole('button', { name: /^Sync:/ }));
     const refused = await screen.findByText(/Your change to a defect \(status\) was not saved\. Only a driver, supervisor or admin/);
     expect(screen.getByText(/^1 conflict waiting for a supervisor/)).toBeInTheDocument();
+    // Her own change met Ben's: she is told, and may put the note away once read.
+    const raised = screen.getByText("Your change to a defect met another phone's change to the same field. Both values are kept, and a supervisor chooses one at the Review desk.");
     await user.click(within(refused.closest('[role="alert"]') as HTMLElement).getByRole('button', { name: 'Dismiss' }));
     await waitFor(() => expect(screen.queryByText(/was not saved/)).toBeNull());
+    await user.click(within(raised.closest('[role="alert"]') as HTMLElement).getByRole('button', { name: 'Dismiss' }));
+    await waitFor(() => expect(screen.queryByText(/met another phone's change/)).toBeNull());
   });
 
   it('sends a refused change again on request, once the server takes it', async () => {
