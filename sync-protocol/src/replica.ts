@@ -39,9 +39,11 @@ export function overlayPending(
     deleted: shadow?.deleted ?? false,
     pending: pending.length,
   };
+  // As the server's merge has it: a delete deletes, and an edit of a record someone else deleted
+  // brings it back (the delete is kept in a conflict for a supervisor).
   for (const change of pending) {
     Object.assign(view.fields, cloneJson(change.patch));
-    if (change.deleted) view.deleted = true;
+    view.deleted = change.deleted === true;
   }
   return view;
 }

@@ -19,6 +19,13 @@ describe('local view of a record', () => {
     expect(overlayPending('r3', 'trip', undefined, [])).toBeUndefined();
   });
 
+  it('shows a record deleted elsewhere again while an edit made here waits, as the server will keep it', () => {
+    const gone = { ...shadow, version: 5, deleted: true };
+    expect(overlayPending('r1', 'trip', gone, [{ patch: { purpose: 'rescue' } }])).toMatchObject({ deleted: false, fields: { purpose: 'rescue' } });
+    expect(overlayPending('r1', 'trip', gone, [])!.deleted).toBe(true);
+    expect(overlayPending('r1', 'trip', shadow, [{ patch: { purpose: 'rescue' } }, { patch: {}, deleted: true }])!.deleted).toBe(true);
+  });
+
   it('builds a mutation whose base is what the device showed', () => {
     const view = overlayPending('r1', 'trip', shadow, [{ patch: { purpose: 'rescue' } }]);
     const m = buildMutation({ mutationId: 'm', seq: 7, hlc: 'h2', view, kind: 'trip', recordId: 'r1', patch: { purpose: 'search' } });
