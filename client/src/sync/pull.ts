@@ -55,8 +55,9 @@ async function matchView(db: ReplicaDb, clubId: string, role: Role): Promise<voi
   const view = viewOf(role);
   const state = await loadClubState(db, clubId);
   if (state.view === view) return;
-  // A copy from before views were kept, or none yet: it is taken to be this role's.
-  if (state.view === undefined || state.checkpoint === undefined) await updateClubState(db, clubId, { view });
+  // With nothing pulled yet, the view is simply this role's. A copy from before views were kept
+  // starts afresh once too: the role it was pulled under is not known.
+  if (state.checkpoint === undefined) await updateClubState(db, clubId, { view });
   else await startReset(db, clubId, view);
 }
 

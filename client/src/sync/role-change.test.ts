@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { kindRules, RECORD_KINDS, SEE_RULES } from '@breakline/sync-protocol';
 import { listRecords } from '@/db/queries';
+import { loadClubState } from '@/db/replica-state';
 import { createRecord } from '@/db/write';
 import { incidentFields } from '@/features/patrol/testing/records';
 import { FakeBackend } from './test/fake-backend';
@@ -44,5 +45,22 @@ describe('a member whose role changes', () => {
     // The note she wrote stays; the one she may no longer see is gone from the phone.
     expect(await notesOn(ana)).toEqual(['member-ana']);
     expect((await ana.db.records.toArray()).filter((r) => r.kind === 'incidentNote').map((r) => r.fields.authorId)).toEqual(['member-ana']);
+  });
+
+  it('starts afresh once a copy pulled before views were kept, whose role is not known', async () => {
+    const backend = new FakeBackend();
+    const ben = testDevice(backend, 'member-ben', 'driver');
+    await createRecord(ben.writer, 'incidentNote', incidentFields({ authorId: 'member-ben' }));
+    await ben.sync();
+    const ana = testDevice(backend, 'member-ana', 'driver');
+    await ana.sync();
+    expect(await notesOn(ana)).toEqual(['member-ben']);
+    // As an older app left it: a checkpoint, and no view. She is crew by now.
+    const state = await loadClubState(ana.db, ana.scope.clubId);
+    await ana.db.syncState.put({ ...state, view: undefined });
+    await setRole(backend, ana, 'crew');
+    expect(await ana.sync()).toEqual({ ok: true });
+    expect(await notesOn(ana)).toEqual([]);
+    expect((await loadClubState(ana.db, ana.scope.clubId)).view).toBe(viewOf('crew'));
   });
 });
