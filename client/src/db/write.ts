@@ -29,10 +29,10 @@ export interface WriteContext {
  * blur, not on each keystroke, so the queue stays at a few hundred a day.
  */
 
-export const invalid = (errors: FieldError[]) =>
+const invalid = (errors: FieldError[]) =>
   new LocalWriteError('invalid', errors.map((e) => e.message).join(' ') || 'This change is not valid.', errors);
 
-export function guard(decision: { ok: true } | { ok: false; reason: string }): void {
+function guard(decision: { ok: true } | { ok: false; reason: string }): void {
   if (!decision.ok) throw new LocalWriteError('forbidden', decision.reason);
 }
 
@@ -64,11 +64,15 @@ function transact<T>(ctx: WriteContext, work: (commit: () => void) => Promise<T>
 
 /** Saves a new record on this phone and queues it; resolves its id (a uuid v7). */
 export async function createRecord<K extends RecordKind>(ctx: WriteContext, kind: K, fields: KindFields[K]): Promise<string> {
+  return createRecordAs(ctx, kind, uuid7((ctx.now ?? Date.now)()), fields);
+}
+
+/** createRecord under a given id: a refused new record made again (db/resend.ts) keeps its own. */
+export async function createRecordAs<K extends RecordKind>(ctx: WriteContext, kind: K, id: string, fields: KindFields[K]): Promise<string> {
   const valid = validateRecord(kind, fields);
   if (!valid.ok) throw invalid(valid.errors);
   guard(checkCreate(kind, ctx.role, valid.value, ctx.userId));
   const now = (ctx.now ?? Date.now)();
-  const id = uuid7(now);
   await transact(ctx, async (commit) => {
     const replica = await loadReplica(ctx.db, now);
     await appendMutation(ctx.db, { clubId: ctx.clubId, kind, recordId: id, row: undefined, view: undefined, patch: valid.value, now, replica }, commit);
@@ -84,7 +88,7 @@ export async function createRecord<K extends RecordKind>(ctx: WriteContext, kind
  */
 export type RecordChange<K extends RecordKind> = Partial<KindFields[K]> | ((shown: KindFields[K]) => Partial<KindFields[K]>);
 
-export function validPatch<K extends RecordKind>(kind: K, patch: unknown): Partial<KindFields[K]> {
+function validPatch<K extends RecordKind>(kind: K, patch: unknown): Partial<KindFields[K]> {
   const valid = validatePatch(kind, patch);
   if (!valid.ok) throw invalid(valid.errors);
   return valid.value;

@@ -11,6 +11,20 @@ import { FakeBackend, readBody } from './test/fake-backend';
 import { TOO_LARGE_ALONE } from './push';
 import { defectFields, testDevice } from './test/device';
 
+/**
+ * A driver's defect, synced, then a change of its status queued after the server came to know her
+ * as crew only: the phone still says driver, so the change is queued and the server refuses it.
+ */
+async function statusChangeAsLoweredDriver(backend: FakeBackend) {
+  const ana = testDevice(backend);
+  const id = await createRecord(ana.writer, 'defect', defectFields());
+  await ana.sync();
+  backend.grant('token-crew', { userId: 'member-ana', role: 'crew', clubId: ana.scope.clubId });
+  ana.auth.token = async () => 'token-crew';
+  await updateRecord(ana.writer, 'defect', id, { status: 'repaired' });
+  return { ana, id };
+}
+
 describe('sync failures', () => {
   it('on 426 asks for an update and stops with the outbox intact', async () => {
     const backend = new FakeBackend();
@@ -59,14 +73,7 @@ describe('sync failures', () => {
   });
 
   it('moves a refused change to the rejected list with the server message, and shows the server value again', async () => {
-    const backend = new FakeBackend();
-    const ana = testDevice(backend);
-    const id = await createRecord(ana.writer, 'defect', defectFields());
-    await ana.sync();
-    // The phone's role was driver when it saved; the server now knows her as crew only.
-    backend.grant('token-crew', { userId: 'member-ana', role: 'crew', clubId: ana.scope.clubId });
-    await updateRecord(ana.writer, 'defect', id, { status: 'repaired' });
-    ana.auth.token = async () => 'token-crew';
+    const { ana, id } = await statusChangeAsLoweredDriver(new FakeBackend());
     expect(await ana.sync()).toEqual({ ok: true });
     expect(await ana.db.outbox.count()).toBe(0);
     const [rejected] = await ana.db.rejected.toArray();
@@ -87,12 +94,7 @@ describe('sync failures', () => {
 
   it('hears a refusal again when the first answer was lost, and keeps the change in the refused list', async () => {
     const backend = new FakeBackend();
-    const ana = testDevice(backend);
-    const id = await createRecord(ana.writer, 'defect', defectFields());
-    await ana.sync();
-    backend.grant('token-crew', { userId: 'member-ana', role: 'crew', clubId: ana.scope.clubId });
-    await updateRecord(ana.writer, 'defect', id, { status: 'repaired' });
-    ana.auth.token = async () => 'token-crew';
+    const { ana, id } = await statusChangeAsLoweredDriver(backend);
     backend.loseNextPushAnswer = true;
     expect(await ana.sync()).toMatchObject({ ok: false });
     expect(await ana.sync()).toEqual({ ok: true });

@@ -2,6 +2,7 @@ import { PULL_CHECKPOINT_HEADER, PULL_HAS_MORE_HEADER, roleAtLeast, SEE_RULES, t
 import { clubRows } from '@/db/queries';
 import { loadClubState, updateClubState } from '@/db/replica-state';
 import type { ReplicaDb } from '@/db/schema';
+import type { ClubSyncRow } from '@/db/types';
 import { ApiError } from '@/lib/api-error';
 import { applyPullPage } from './apply-page';
 import type { ProgressListener } from './progress';
@@ -30,11 +31,11 @@ function isPullResponse(value: unknown): value is PullResponse {
  * the last page lands, rows the new pull did not bring (and no queued edit holds) are swept.
  * Clearing first would show empty lists for the length of a full sync.
  */
-async function startReset(db: ReplicaDb, clubId: string, view?: string): Promise<void> {
-  await db.transaction('rw', db.syncState, async () => {
+async function startReset(db: ReplicaDb, clubId: string, view?: string): Promise<ClubSyncRow> {
+  return db.transaction('rw', db.syncState, async () => {
     const state = await loadClubState(db, clubId);
     const gen = state.gen + 1;
-    await updateClubState(db, clubId, { gen, sweepBelow: gen, checkpoint: undefined, ...(view === undefined ? {} : { view }) });
+    return updateClubState(db, clubId, { gen, sweepBelow: gen, checkpoint: undefined, ...(view === undefined ? {} : { view }) });
   });
 }
 
@@ -51,14 +52,13 @@ export function viewOf(role: Role): string {
  * what the role could not see, so a promoted member would never get those records, and a member
  * whose role was lowered would keep what they may no longer see (the reset's sweep removes it).
  */
-async function matchView(db: ReplicaDb, clubId: string, role: Role): Promise<void> {
+async function matchView(db: ReplicaDb, clubId: string, role: Role): Promise<ClubSyncRow> {
   const view = viewOf(role);
   const state = await loadClubState(db, clubId);
-  if (state.view === view) return;
+  if (state.view === view) return state;
   // With nothing pulled yet, the view is simply this role's. A copy from before views were kept
   // starts afresh once too: the role it was pulled under is not known.
-  if (state.checkpoint === undefined) await updateClubState(db, clubId, { view });
-  else await startReset(db, clubId, view);
+  return state.checkpoint === undefined ? updateClubState(db, clubId, { view }) : startReset(db, clubId, view);
 }
 
 interface Asked {
@@ -98,8 +98,7 @@ export async function pullAll(ctx: PullContext): Promise<void> {
     page.catch(() => undefined);
     return { counted: count, head, page };
   };
-  await matchView(db, scope.clubId, scope.role);
-  const start = await loadClubState(db, scope.clubId);
+  const start = await matchView(db, scope.clubId, scope.role);
   let since = start.checkpoint;
   // A first sync: no checkpoint and nothing of the club here yet (see applyPullPage).
   let fromEmpty = since === undefined && (await clubRows(db, scope.clubId).count()) === 0 ? { gen: start.gen } : undefined;

@@ -2,6 +2,7 @@ import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { IsNull, Repository } from 'typeorm';
+import { isUUID } from 'class-validator';
 import { Env } from '../config/env.js';
 import { AppError } from '../common/app-error.js';
 import { RefreshToken } from './refresh-token.entity.js';
@@ -43,7 +44,7 @@ export class RefreshTokensService {
 
   private async find(token: string): Promise<RefreshToken> {
     const [id, secret] = token.split('.');
-    if (!id || !secret || !/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id)) throw refused();
+    if (!id || !secret || !isUUID(id)) throw refused();
     const row = await this.repo.findOne({ where: { id } });
     if (!row) throw refused();
     const a = Buffer.from(row.secretHash, 'hex');

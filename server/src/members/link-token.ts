@@ -1,4 +1,5 @@
 import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
+import { isUUID } from 'class-validator';
 
 /** Tokens in mailed links are `<row id>.<secret>`; the row keeps only the secret's SHA-256. */
 export function newSecret(): { secret: string; hash: string } {
@@ -11,7 +12,7 @@ export const linkToken = (id: string, secret: string) => `${id}.${secret}`;
 /** The row id and secret of a token, or null when it cannot be one of ours. */
 export function splitToken(token: string): { id: string; secret: string } | null {
   const [id, secret, extra] = token.trim().split('.');
-  if (extra !== undefined || !id || !secret || !/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i.test(id) || !/^[A-Za-z0-9_-]{20,100}$/.test(secret)) return null;
+  if (extra !== undefined || !id || !secret || !isUUID(id) || !/^[A-Za-z0-9_-]{20,100}$/.test(secret)) return null;
   return { id, secret };
 }
 

@@ -66,20 +66,16 @@ export class PushService {
     const ctx = { club, auth, deviceId, pt: Date.now(), clock: this.clock, newId: () => crypto.randomUUID(), validated: new Map<Fields, Fields>() };
     const results: MutationResult[] = [];
     const changes: ChangeEntry[] = [];
-    const refusals: Refusal[] = [];
     // A replay of a change refused before gets that refusal again: "duplicate" would tell the
     // phone it had been taken, and the phone would drop it.
     const replayed = mutations.filter((m) => m.seq <= deviceSeq).map((m) => m.mutationId);
     const refusedBefore = await loadRefusals(em, p.clubId, replayed);
-    const refuse = (m: Mutation, error: MutationError) => {
-      results.push({ mutationId: m.mutationId, status: 'rejected', error });
-      refusals.push({ mutationId: m.mutationId, error });
-    };
+    const refuse = (m: Mutation, error: MutationError) => results.push({ mutationId: m.mutationId, status: 'rejected', error });
     for (const m of mutations) {
       if (m.seq <= (club.deviceSeq[deviceId] ?? 0)) {
         const error = refusedBefore.get(m.mutationId);
         if (error) {
-          results.push({ mutationId: m.mutationId, status: 'rejected', error }); // kept already
+          refuse(m, error);
           continue;
         }
         const rec = club.records[m.recordId];
@@ -101,10 +97,11 @@ export class PushService {
       const prevSeq = club.changeSeq;
       const result = applyMutation(ctx, m);
       results.push(result);
-      if (result.status === 'rejected' && result.error) refusals.push({ mutationId: m.mutationId, error: result.error });
       if (club.changeSeq > prevSeq) changes.push(changeEntry(club.records[m.recordId]!, before?.fields, m, result));
     }
     const lastSeq = club.deviceSeq[deviceId] ?? deviceSeq;
+    // Every refusal of the batch is kept; one kept before stays as it was.
+    const refusals: Refusal[] = results.flatMap((r) => (r.status === 'rejected' && r.error ? [{ mutationId: r.mutationId, error: r.error }] : []));
     await insertRefusals(em, p.clubId, deviceId, refusals);
     // Each trip to the database waits its turn for the processor on a busy machine: the device's
     // seq goes with the changes when there are any.

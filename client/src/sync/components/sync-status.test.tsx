@@ -32,6 +32,15 @@ function setUp(role: 'crew' | 'driver' = 'driver') {
   return { backend, runner, writer };
 }
 
+/** Renders the status, lets the sync settle, and opens its details, as a person taps it. */
+async function openDetails(runner: SyncRunner) {
+  render(<SyncStatus runner={runner} />);
+  await act(() => runner.idle());
+  const user = userEvent.setup();
+  await user.click(await screen.findByRole('button', { name: /^Sync:/ }));
+  return user;
+}
+
 afterEach(async () => {
   syncActivity.set({ storage: 'unknown' });
   await openReplica('u-1').delete();
@@ -76,10 +85,7 @@ describe('sync status', () => {
     await updateRecord(writer, 'defect', id, { description: 'Strap frayed, one end only' });
     backend.grant('access-1', { userId: 'u-1', role: 'crew', clubId: 'c-1' }); // role lowered on the server
     await updateRecord(writer, 'defect', id, { status: 'repaired' });
-    render(<SyncStatus runner={runner} />);
-    await act(() => runner.idle());
-    const user = userEvent.setup();
-    await user.click(await screen.findByRole('button', { name: /^Sync:/ }));
+    const user = await openDetails(runner);
     const refused = await screen.findByText(/Your change to a defect \(status\) was not saved\. Only a driver, supervisor or admin/);
     expect(screen.getByText(/^1 conflict waiting for a supervisor/)).toBeInTheDocument();
     // Her own change met Ben's: she is told, and may put the note away once read.
@@ -96,10 +102,7 @@ describe('sync status', () => {
     await runner.requestSync();
     backend.grant('access-1', { userId: 'u-1', role: 'crew', clubId: 'c-1' }); // role lowered on the server
     await updateRecord(writer, 'defect', id, { status: 'repaired' });
-    render(<SyncStatus runner={runner} />);
-    await act(() => runner.idle());
-    const user = userEvent.setup();
-    await user.click(await screen.findByRole('button', { name: /^Sync:/ }));
+    const user = await openDetails(runner);
     const refused = await screen.findByText(/Your change to a defect \(status\) was not saved/);
     backend.grant('access-1', { userId: 'u-1', role: 'driver', clubId: 'c-1' }); // an admin puts it right
     await user.click(within(refused.closest('[role="alert"]') as HTMLElement).getByRole('button', { name: 'Send again' }));
